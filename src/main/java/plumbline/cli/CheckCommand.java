@@ -1,0 +1,48 @@
+package plumbline.cli;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+@Command(name = "check", mixinStandardHelpOptions = true,
+        description = "Re-solve the model and compare every claimed reaction, member peak and displacement.")
+final class CheckCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "MODEL", description = "model file (.yaml, .yml or .json)")
+    Path model;
+
+    @Option(names = "--claims", paramLabel = "FILE", arity = "1..*",
+            description = "claims file(s): YAML, JSON or CSV (item,combo,name,quantity,value,unit); the model's own claims: are read too")
+    List<Path> claims = new ArrayList<>();
+
+    @Option(names = "--json", paramLabel = "FILE", description = "write the results as JSON (FORMAT.md section 5)")
+    Path json;
+
+    @Option(names = "--pdf", paramLabel = "FILE", description = "write the PDF discrepancy report")
+    Path pdf;
+
+    @Option(names = "--tolerance", paramLabel = "PCT", converter = PercentConverter.class,
+            description = "relative tolerance for every claim without its own, e.g. 5%% (default: by kind, reactions 3%%, "
+                    + "member forces 5%%, deflections 10%%)")
+    Double tolerance;
+
+    @Override
+    public Integer call() {
+        var out = spec.commandLine().getOut();
+        var err = spec.commandLine().getErr();
+        if (pdf != null) {
+            err.println("plumbline: the PDF report is not available in this version; use --json");
+            return Main.INTERNAL;
+        }
+        return Run.execute(model, claims, json, "both", tolerance == null ? Double.NaN : tolerance, true, out, err);
+    }
+}

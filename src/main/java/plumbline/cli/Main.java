@@ -1,0 +1,54 @@
+package plumbline.cli;
+
+import java.io.PrintWriter;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * Entry point. Exit codes (FORMAT.md section 6): 0 every claim ok, 1 a claim marginal or
+ * mismatched or the model unstable, 2 invalid input, 3 internal error.
+ */
+@Command(name = "plumbline", mixinStandardHelpOptions = true, version = "plumbline 1.0.0",
+        description = "Independent check of plane frame, beam and truss models and of the results claimed for them.",
+        subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, UnitsCommand.class,
+                CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+
+    public static final int OK = 0, FLAGGED = 1, INPUT = 2, INTERNAL = 3;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** Runs the command line with the given writers; returns the exit code (never exits). */
+    public static int run(String[] args, PrintWriter out, PrintWriter err) {
+        CommandLine cl = new CommandLine(new Main());
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setExecutionExceptionHandler((ex, line, parsed) -> {
+            line.getErr().println("plumbline: internal error: " + ex);
+            line.getErr().println("  please report this with the input files; no output file was written");
+            return INTERNAL;
+        });
+        cl.setParameterExceptionHandler((ex, args1) -> {
+            ex.getCommandLine().getErr().println("plumbline: " + ex.getMessage());
+            ex.getCommandLine().getErr().println("  see: plumbline " + (ex.getCommandLine().getCommandName().equals("plumbline")
+                    ? "" : ex.getCommandLine().getCommandName() + " ") + "--help");
+            return INPUT;
+        });
+        int code = cl.execute(args);
+        out.flush();
+        err.flush();
+        return code;
+    }
+
+    public static void main(String[] args) {
+        PrintWriter out = new PrintWriter(System.out, true);
+        PrintWriter err = new PrintWriter(System.err, true);
+        System.exit(run(args, out, err));
+    }
+}

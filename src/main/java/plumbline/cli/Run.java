@@ -1,0 +1,66 @@
+package plumbline.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import plumbline.io.OutputFiles;
+import plumbline.model.InputException;
+import plumbline.model.Problem;
+import plumbline.report.Console;
+import plumbline.report.ResultsTree;
+import plumbline.review.Analysis;
+import plumbline.review.Review;
+import plumbline.review.TolerancePolicy;
+import plumbline.solve.Engine;
+import plumbline.solve.stiffness.StiffnessEngine;
+
+/** The shared run of {@code check} and {@code solve}: read, analyse, review, write, exit code. */
+final class Run {
+
+    private Run() {
+    }
+
+    static List<Engine> engines(String method) {
+        List<Engine> out = new ArrayList<>();
+        if (method.equals("stiffness") || method.equals("both")) out.add(new StiffnessEngine());
+        return out;
+    }
+
+    static int execute(Path model, List<Path> claims, Path json, String method, double tolerance, boolean printClaims,
+                       PrintWriter out, PrintWriter err) {
+        if (method.equals("force")) {
+            err.println("plumbline: the force method engine is not available in this version; use --method stiffness");
+            return Main.INTERNAL;
+        }
+        Inputs in;
+        try {
+            in = Inputs.load(model, claims);
+            if (json != null) OutputFiles.refuseInputs(json, in.files, "--json");
+        } catch (InputException e) {
+            for (Problem p : e.problems()) err.println(p);
+            err.println("plumbline: " + e.problems().size() + " input problem" + (e.problems().size() == 1 ? "" : "s")
+                    + "; nothing was analysed and no file was written");
+            return Main.INPUT;
+        }
+        Analysis a = Analysis.of(in.model, engines(method));
+        Review r = Review.of(a, new TolerancePolicy(tolerance));
+        String shown = a.primaryEngine();
+        Double agreement = null;
+        if (json != null) {
+            Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
+            try {
+                OutputFiles.writeAtomically(json, OutputFiles.json(tree));
+            } catch (IOException e) {
+                err.println(json + ": cannot write the results: " + e.getMessage());
+                return Main.INTERNAL;
+            }
+        }
+        out.print(Console.summary(r, shown == null ? "none" : shown + " method", agreement));
+        if (json != null) out.println("Results written to " + json);
+        if (!a.stable()) return Main.FLAGGED;
+        return r.verdict().equals("ok") ? Main.OK : Main.FLAGGED;
+    }
+}

@@ -1,0 +1,259 @@
+package plumbline.io;
+
+import com.fasterxml.jackson.databind.MappingIterator;
+import com.fasterxml.jackson.dataformat.csv.CsvMapper;
+import com.fasterxml.jackson.dataformat.csv.CsvParser;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import plumbline.model.Claim;
+import plumbline.model.ClaimSet;
+import plumbline.model.InputException;
+import plumbline.model.Model;
+import plumbline.model.Problem;
+import plumbline.model.SourceRef;
+import plumbline.units.Dimension;
+import plumbline.units.Unit;
+import plumbline.units.UnitParseException;
+import plumbline.units.UnitSystem;
+import plumbline.units.Units;
+
+/**
+ * Reads claims (FORMAT.md section 4) from a model's {@code claims:} key, a YAML or JSON
+ * claims file, or a CSV file with the header {@code item,combo,name,quantity,value,unit}.
+ * Values are converted to SI from the claims' own units.
+ */
+public final class ClaimsReader {
+
+    public static final List<String> REACTION_KEYS = List.of("Fx", "Fy", "Mz");
+    public static final List<String> PEAK_KEYS = List.of("N_max", "N_min", "N_abs", "V_max", "V_min", "V_abs",
+            "M_max", "M_min", "M_abs", "deflection");
+    public static final List<String> DISPLACEMENT_KEYS = List.of("ux", "uy", "rz");
+    static final List<String> TOLERANCE_KEYS = List.of("default", "reaction", "member", "deflection", "displacement");
+
+    private ClaimsReader() {
+    }
+
+    /** The dimension of a claimed quantity. */
+    public static Dimension dimensionOf(Claim.Kind kind, String quantity) {
+        if (kind == Claim.Kind.REACTION) return quantity.equals("Mz") ? Dimension.MOMENT : Dimension.FORCE;
+        if (kind == Claim.Kind.DISPLACEMENT) return quantity.equals("rz") ? Dimension.ANGLE : Dimension.LENGTH;
+        if (quantity.equals("deflection")) return Dimension.LENGTH;
+        return quantity.startsWith("M") ? Dimension.MOMENT : Dimension.FORCE;
+    }
+
+    /** Reads a separate claims file for {@code model}. */
+    public static ClaimSet read(Path path, Model model) throws InputException {
+        String name = path.toString();
+        String text = ModelReader.readText(path);
+        List<Problem> problems = new ArrayList<>();
+        ClaimSet cs;
+        if (name.toLowerCase(Locale.ROOT).endsWith(".csv")) {
+            cs = csv(name, text, model, problems);
+        } else {
+            Tree root = TreeReader.read(name, text, ModelReader.isYaml(name));
+            Fields top = Fields.of(root, "", problems, List.of("claims"), "a map with the single key 'claims:'");
+            cs = null;
+            if (top != null) {
+                if (!top.has("claims")) top.missing("claims", "a claims file holds one top-level key, claims:");
+                else cs = claimSet(top.get("claims"), name, "claims", problems, model);
+            }
+        }
+        if (!problems.isEmpty() || cs == null) throw new InputException(problems);
+        return cs;
+    }
+
+    static ClaimSet claimSet(Tree t, String file, String path, List<Problem> problems, Model model) {
+        Fields f = Fields.of(t, path, problems, List.of("source", "units", "tolerance", "reactions", "members",
+                "displacements"), "a map with source, units, tolerance, reactions, members, displacements");
+        if (f == null) return null;
+        String source = f.text("source", false, "free text");
+        UnitSystem units = model.units();
+        if (f.has("units")) {
+            UnitSystem u = ModelReader.unitSystem(f.get("units"), f.field("units"), problems, true, f.at("units"));
+            if (u != null) units = u;
+        }
+        Map<String, Double> tol = new LinkedHashMap<>();
+        if (f.has("tolerance")) {
+            Fields tf = Fields.of(f.get("tolerance"), f.field("tolerance"), problems, TOLERANCE_KEYS,
+                    "a map such as {default: 3%, deflection: 10%}");
+            if (tf != null) {
+                for (Tree.Entry e : tf.map.entries().values()) {
+                    if (!TOLERANCE_KEYS.contains(e.key())) continue;
+                    double v = tolerance(e.value(), tf.field(e.key()), problems);
+                    if (!Double.isNaN(v)) tol.put(e.key(), v);
+                }
+            }
+        }
+        List<Claim> claims = new ArrayList<>();
+        section(f, "reactions", Claim.Kind.REACTION, "node", REACTION_KEYS, units, problems, claims);
+        section(f, "members", Claim.Kind.MEMBER, "member", PEAK_KEYS, units, problems, claims);
+        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", DISPLACEMENT_KEYS, units, problems, claims);
+        return new ClaimSet(file, source == null ? "" : source, tol, claims);
+    }
+
+    /** A relative tolerance written as "3%" or as a fraction 0.03. */
+    static double tolerance(Tree t, String field, List<Problem> problems) {
+        if (t instanceof Tree.Scalar s) {
+            String text = s.text().trim();
+            try {
+                double v = text.endsWith("%") ? Double.parseDouble(text.substring(0, text.length() - 1).trim()) / 100.0
+                        : Double.parseDouble(text);
+                if (v >= 0 && v < 1 && Double.isFinite(v)) return v;
+                problems.add(new Problem(t.at(), field, "tolerance " + text + " is out of range; expected e.g. 3% (0 to 100%)"));
+                return Double.NaN;
+            } catch (NumberFormatException e) {
+                // fall through
+            }
+        }
+        problems.add(new Problem(t.at(), field, "found " + t.describe() + "; expected a relative tolerance such as 3% or 0.03"));
+        return Double.NaN;
+    }
+
+    private static void section(Fields f, String key, Claim.Kind kind, String nameKey, List<String> quantities,
+                                UnitSystem units, List<Problem> problems, List<Claim> out) {
+        List<Tree> items = f.list(key, false, "a list of claims");
+        for (int i = 0; i < items.size(); i++) {
+            String p = f.field(key) + "[" + i + "]";
+            List<String> allowed = new ArrayList<>(quantities);
+            allowed.add(nameKey);
+            allowed.add("combo");
+            allowed.add("tolerance");
+            Fields g = Fields.of(items.get(i), p, problems, allowed, "a map such as {" + nameKey + ": A, combo: ULS-1, "
+                    + quantities.get(1) + ": 96.2}");
+            if (g == null) continue;
+            String name = g.text(nameKey, true, "a " + nameKey + " name");
+            String combo = g.text("combo", true, "a combination, a load case or envelope");
+            double tol = g.has("tolerance") ? tolerance(g.get("tolerance"), g.field("tolerance"), problems) : Double.NaN;
+            int n = 0;
+            for (String q : quantities) {
+                if (!g.has(q)) continue;
+                n++;
+                Dimension d = dimensionOf(kind, q);
+                Tree v = g.get(q);
+                double si = Fields.quantityOf(v, g.field(q), d, units, problems);
+                double written = Double.NaN;
+                String unit = units.symbol(d);
+                if (v instanceof Tree.Scalar s) {
+                    try {
+                        Units.Written w = Units.parseQuantity(s.text());
+                        written = w.value();
+                        if (w.unit() != null) unit = w.unit().symbol();
+                    } catch (UnitParseException e) {
+                        // reported by quantityOf
+                    }
+                }
+                if (kind == Claim.Kind.MEMBER && q.equals("deflection") && si < 0) {
+                    g.problem(v.at(), q, "a deflection is a magnitude; expected a value >= 0");
+                }
+                if (name != null && combo != null && !Double.isNaN(si)) {
+                    out.add(new Claim(kind, name, combo, q, si, d, written, unit, tol, g.at(q)));
+                }
+            }
+            if (n == 0) {
+                problems.add(new Problem(items.get(i).at(), p, "no claimed value; expected at least one of "
+                        + String.join(", ", quantities)));
+            }
+        }
+    }
+
+    private static ClaimSet csv(String file, String text, Model model, List<Problem> problems) {
+        CsvMapper mapper = new CsvMapper();
+        mapper.enable(CsvParser.Feature.WRAP_AS_ARRAY);
+        List<Claim> claims = new ArrayList<>();
+        UnitSystem units = model.units();
+        try (MappingIterator<String[]> it = mapper.readerFor(String[].class).readValues(text)) {
+            if (!it.hasNext()) {
+                problems.add(new Problem(new SourceRef(file, 1, 1), "(header)", "empty file; expected the header item,combo,name,quantity,value,unit"));
+                return null;
+            }
+            String[] header = it.next();
+            List<String> expected = List.of("item", "combo", "name", "quantity", "value", "unit");
+            List<String> got = new ArrayList<>();
+            for (String h : header) got.add(h.trim());
+            if (!got.equals(expected)) {
+                problems.add(new Problem(new SourceRef(file, 1, 1), "(header)", "header is '" + String.join(",", got)
+                        + "'; expected item,combo,name,quantity,value,unit"));
+                return null;
+            }
+            while (it.hasNext()) {
+                int line = it.getCurrentLocation().getLineNr();
+                String[] row;
+                try {
+                    row = it.next();
+                } catch (RuntimeException e) {
+                    problems.add(new Problem(new SourceRef(file, line, 1), "(row)", "cannot read the row: " + e.getMessage()));
+                    break;
+                }
+                line = Math.max(1, it.getCurrentLocation().getLineNr() - 1);
+                if (row.length == 1 && row[0].isBlank()) continue;
+                SourceRef at = new SourceRef(file, line, 1);
+                if (row.length < 5 || row.length > 6) {
+                    problems.add(new Problem(at, "(row)", "row has " + row.length + " fields; expected 6: item,combo,name,quantity,value,unit"));
+                    continue;
+                }
+                String item = row[0].trim(), combo = row[1].trim(), name = row[2].trim(), q = row[3].trim();
+                String unitText = row.length > 5 ? row[5].trim() : "";
+                Claim.Kind kind = switch (item) {
+                    case "reaction" -> Claim.Kind.REACTION;
+                    case "member" -> Claim.Kind.MEMBER;
+                    case "displacement" -> Claim.Kind.DISPLACEMENT;
+                    default -> null;
+                };
+                if (kind == null) {
+                    problems.add(new Problem(at, "item", "found '" + item + "'; expected reaction, member or displacement"));
+                    continue;
+                }
+                List<String> qs = kind == Claim.Kind.REACTION ? REACTION_KEYS : kind == Claim.Kind.MEMBER ? PEAK_KEYS : DISPLACEMENT_KEYS;
+                if (!qs.contains(q)) {
+                    String hint = Fields.closest(q, qs);
+                    problems.add(new Problem(at, "quantity", "unknown " + item + " quantity '" + q + "'"
+                            + (hint != null ? "; did you mean '" + hint + "'?" : "; expected one of " + String.join(", ", qs))));
+                    continue;
+                }
+                if (combo.isEmpty() || name.isEmpty()) {
+                    problems.add(new Problem(at, combo.isEmpty() ? "combo" : "name", "empty; expected a name"));
+                    continue;
+                }
+                Dimension d = dimensionOf(kind, q);
+                double value;
+                try {
+                    value = Double.parseDouble(row[4].trim());
+                    if (!Double.isFinite(value)) throw new NumberFormatException();
+                } catch (NumberFormatException e) {
+                    problems.add(new Problem(at, "value", "'" + row[4] + "' is not a finite number"));
+                    continue;
+                }
+                double si;
+                String unitShown;
+                if (unitText.isEmpty()) {
+                    si = units.toInternal(value, d);
+                    unitShown = units.symbol(d);
+                } else {
+                    try {
+                        Unit u = Units.parse(unitText);
+                        if (!u.dimension().matchesIgnoringAngle(d)) {
+                            problems.add(new Problem(at, "unit", "unit '" + unitText + "' is " + u.dimension().describe()
+                                    + "; expected " + d.describe()));
+                            continue;
+                        }
+                        si = u.toInternal(value);
+                        unitShown = unitText;
+                    } catch (UnitParseException e) {
+                        problems.add(new Problem(at, "unit", e.getMessage()));
+                        continue;
+                    }
+                }
+                claims.add(new Claim(kind, name, combo, q, si, d, value, unitShown, Double.NaN, at));
+            }
+        } catch (IOException | RuntimeException e) {
+            problems.add(new Problem(new SourceRef(file, 0, 0), "(file)", "cannot read as CSV: " + e.getMessage()));
+            return null;
+        }
+        return new ClaimSet(file, "", Map.of(), claims);
+    }
+}

@@ -1,0 +1,74 @@
+package plumbline.io;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import java.io.IOException;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.List;
+import java.util.Map;
+import plumbline.model.InputException;
+import plumbline.model.Problem;
+import plumbline.model.SourceRef;
+
+/**
+ * Writes output files safely: never over an input file, always through a temporary file
+ * in the same folder renamed into place, so a failed run leaves no partial file.
+ */
+public final class OutputFiles {
+
+    private OutputFiles() {
+    }
+
+    /** Refuses an output path that is one of the inputs (exit code 2, before any work is done). */
+    public static void refuseInputs(Path out, List<Path> inputs, String option) throws InputException {
+        for (Path in : inputs) {
+            try {
+                if (Files.exists(out) && Files.exists(in) && Files.isSameFile(out, in)) {
+                    throw new InputException(new Problem(SourceRef.none(out.toString()), option,
+                            "is an input file; expected a new file name for the output"));
+                }
+            } catch (IOException e) {
+                // unreadable: the write itself will report it
+            }
+            if (out.toAbsolutePath().normalize().equals(in.toAbsolutePath().normalize())) {
+                throw new InputException(new Problem(SourceRef.none(out.toString()), option,
+                        "is an input file; expected a new file name for the output"));
+            }
+        }
+        Path dir = out.toAbsolutePath().getParent();
+        if (dir != null && !Files.isDirectory(dir)) {
+            throw new InputException(new Problem(SourceRef.none(out.toString()), option,
+                    "folder " + dir + " does not exist; expected an existing folder"));
+        }
+    }
+
+    public static void writeAtomically(Path out, byte[] bytes) throws IOException {
+        Path dir = out.toAbsolutePath().getParent();
+        Path tmp = Files.createTempFile(dir, "." + out.getFileName() + ".", ".part");
+        try {
+            Files.write(tmp, bytes);
+            try {
+                Files.move(tmp, out, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, out, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(tmp);
+        }
+    }
+
+    /** The tree as indented JSON text (maps keep their order). */
+    public static byte[] json(Map<String, Object> tree) throws IOException {
+        ObjectMapper m = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+        return m.writeValueAsBytes(tree);
+    }
+
+    /** A JSON text parsed to plain maps and lists (for tests and the schema check). */
+    @SuppressWarnings("unchecked")
+    public static Map<String, Object> parseJson(String text) throws IOException {
+        return new ObjectMapper().readValue(text, Map.class);
+    }
+}

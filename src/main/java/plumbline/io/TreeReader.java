@@ -1,0 +1,140 @@
+package plumbline.io;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import java.io.IOException;
+import java.io.Reader;
+import java.io.StringReader;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import plumbline.model.InputException;
+import plumbline.model.Problem;
+import plumbline.model.SourceRef;
+
+/**
+ * Reads one YAML or JSON document into a located {@link Tree}, refusing duplicate keys,
+ * deep nesting and oversized input with a message that names the place.
+ */
+final class TreeReader {
+
+    /** Nesting deeper than this is no model a person wrote (a model needs five levels). */
+    static final int MAX_DEPTH = 40;
+    /** Largest input file accepted, in characters. */
+    static final long MAX_CHARS = 64L * 1024 * 1024;
+    /** Longest number accepted, in digits. */
+    static final int MAX_NUMBER_LENGTH = 60;
+
+    private final String file;
+    private final List<Problem> problems = new ArrayList<>();
+
+    private TreeReader(String file) {
+        this.file = file;
+    }
+
+    static Tree read(String file, String text, boolean yaml) throws InputException {
+        TreeReader r = new TreeReader(file);
+        Tree t = r.parse(text, yaml);
+        if (!r.problems.isEmpty()) throw new InputException(r.problems);
+        return t;
+    }
+
+    private Tree parse(String text, boolean yaml) throws InputException {
+        if (text.length() > MAX_CHARS) {
+            throw new InputException(new Problem(SourceRef.none(file), "(file)",
+                    "file is " + text.length() + " characters; at most " + MAX_CHARS + " are read"));
+        }
+        StreamReadConstraints limits = StreamReadConstraints.builder()
+                .maxNestingDepth(MAX_DEPTH + 10).maxNumberLength(MAX_NUMBER_LENGTH)
+                .maxStringLength(1_000_000).build();
+        JsonFactory f = yaml ? YAMLFactory.builder().streamReadConstraints(limits).build()
+                : JsonFactory.builder().streamReadConstraints(limits).build();
+        try (Reader in = new StringReader(text); JsonParser p = f.createParser(in)) {
+            JsonToken t = p.nextToken();
+            if (t == null) {
+                throw new InputException(new Problem(new SourceRef(file, 1, 1), "(document)",
+                        "the file is empty; expected a map with 'format: plumbline/1' or 'claims:'"));
+            }
+            Tree root = value(p, 0);
+            JsonToken after = p.nextToken();
+            if (after != null) {
+                problems.add(new Problem(ref(p.currentTokenLocation()), "(document)",
+                        "more than one document in the file; expected exactly one"));
+            }
+            return root;
+        } catch (JsonProcessingException e) {
+            JsonLocation loc = e.getLocation();
+            String msg = e.getOriginalMessage();
+            if (msg != null) msg = msg.replaceAll("\\s+", " ").trim();
+            throw new InputException(new Problem(loc == null ? SourceRef.none(file) : ref(loc), "(syntax)",
+                    "cannot read the file as " + (yaml ? "YAML" : "JSON") + ": " + shorten(msg)));
+        } catch (IOException e) {
+            throw new InputException(new Problem(SourceRef.none(file), "(file)", "cannot read: " + e.getMessage()));
+        } catch (RuntimeException e) {
+            // The YAML layer reports some malformed input (bad aliases, tags) as unchecked errors.
+            throw new InputException(new Problem(SourceRef.none(file), "(syntax)",
+                    "cannot read the file as " + (yaml ? "YAML" : "JSON") + ": " + shorten(String.valueOf(e.getMessage()))));
+        }
+    }
+
+    private static String shorten(String s) {
+        if (s == null) return "malformed input";
+        return s.length() > 200 ? s.substring(0, 200) + "..." : s;
+    }
+
+    private SourceRef ref(JsonLocation loc) {
+        return new SourceRef(file, Math.max(loc.getLineNr(), 0), Math.max(loc.getColumnNr(), 0));
+    }
+
+    private Tree value(JsonParser p, int depth) throws IOException, InputException {
+        SourceRef at = ref(p.currentTokenLocation());
+        if (depth > MAX_DEPTH) {
+            throw new InputException(new Problem(at, "(document)",
+                    "nesting deeper than " + MAX_DEPTH + " levels; a model needs only a few"));
+        }
+        JsonToken t = p.currentToken();
+        switch (t) {
+            case START_OBJECT: {
+                Map<String, Tree.Entry> entries = new LinkedHashMap<>();
+                while (p.nextToken() == JsonToken.FIELD_NAME) {
+                    String key = p.currentName();
+                    SourceRef keyAt = ref(p.currentTokenLocation());
+                    p.nextToken();
+                    Tree v = value(p, depth + 1);
+                    if (entries.containsKey(key)) {
+                        problems.add(new Problem(keyAt, key, "duplicate key '" + key
+                                + "' (first at line " + entries.get(key).keyAt().line() + "); each key may appear once"));
+                    } else {
+                        entries.put(key, new Tree.Entry(key, keyAt, v));
+                    }
+                }
+                return new Tree.MapNode(entries, at);
+            }
+            case START_ARRAY: {
+                List<Tree> items = new ArrayList<>();
+                while (p.nextToken() != JsonToken.END_ARRAY) {
+                    items.add(value(p, depth + 1));
+                }
+                return new Tree.ListNode(items, at);
+            }
+            case VALUE_NUMBER_INT:
+            case VALUE_NUMBER_FLOAT:
+                return new Tree.Scalar(p.getText(), Tree.Scalar.Kind.NUMBER, at);
+            case VALUE_TRUE:
+            case VALUE_FALSE:
+                return new Tree.Scalar(p.getText(), Tree.Scalar.Kind.BOOLEAN, at);
+            case VALUE_NULL:
+                return new Tree.Scalar("", Tree.Scalar.Kind.NULL, at);
+            case VALUE_STRING:
+                return new Tree.Scalar(p.getText(), Tree.Scalar.Kind.STRING, at);
+            default:
+                throw new InputException(new Problem(at, "(document)", "unexpected " + t + " in the file"));
+        }
+    }
+}

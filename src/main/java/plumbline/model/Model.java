@@ -1,0 +1,62 @@
+package plumbline.model;
+
+import java.util.List;
+import java.util.Map;
+import plumbline.units.UnitSystem;
+
+/**
+ * A validated plane model in SI units (N, m, Pa, rad, K). Nodes, members and the other
+ * named parts keep the order in which they were written; maps are keyed by name.
+ * {@code redundants} names the force-method redundants chosen by the user (may be empty).
+ */
+public record Model(String file, Job job, UnitSystem units, Map<String, Material> materials,
+                    Map<String, Section> sections, Map<String, Node> nodes, Map<String, Support> supports,
+                    Map<String, Member> members, List<LoadCase> loadCases, List<Combination> combinations,
+                    List<String> standardCombinations, List<String> redundants, List<ClaimSet> claims) {
+
+    public Model {
+        materials = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(materials));
+        sections = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(sections));
+        nodes = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(nodes));
+        supports = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(supports));
+        members = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(members));
+        loadCases = List.copyOf(loadCases);
+        combinations = List.copyOf(combinations);
+        standardCombinations = List.copyOf(standardCombinations);
+        redundants = List.copyOf(redundants);
+        claims = List.copyOf(claims);
+    }
+
+    public Node node(String name) {
+        return nodes.get(name);
+    }
+
+    public Member member(String name) {
+        return members.get(name);
+    }
+
+    public LoadCase loadCase(String name) {
+        for (LoadCase c : loadCases) if (c.name().equals(name)) return c;
+        return null;
+    }
+
+    public Section sectionOf(Member m) {
+        return sections.get(m.section());
+    }
+
+    public Material materialOf(Member m) {
+        return materials.get(sectionOf(m).material());
+    }
+
+    public double lengthM(Member m) {
+        Node a = node(m.from()), b = node(m.to());
+        return Math.hypot(b.xM() - a.xM(), b.yM() - a.yM());
+    }
+
+    public Model withClaims(List<ClaimSet> more) {
+        List<ClaimSet> all = new java.util.ArrayList<>(claims);
+        all.addAll(more);
+        return new Model(file, job, units, materials, sections, nodes, supports, members, loadCases,
+                combinations, standardCombinations, redundants, all);
+    }
+}

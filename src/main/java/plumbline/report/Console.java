@@ -1,0 +1,142 @@
+package plumbline.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import plumbline.model.Claim;
+import plumbline.model.Model;
+import plumbline.review.ClaimResult;
+import plumbline.review.Review;
+import plumbline.statics.ClaimedEquilibrium;
+import plumbline.statics.Determinacy;
+import plumbline.units.UnitSystem;
+
+/** The console summary of a check, lines of at most 80 characters. */
+public final class Console {
+
+    public static final int WIDTH = 80;
+
+    private Console() {
+    }
+
+    public static String determinacy(Determinacy.Result d) {
+        StringBuilder sb = new StringBuilder();
+        sb.append("Statics: ").append(d.classification().word);
+        if (d.classification() == Determinacy.Classification.INDETERMINATE) sb.append(", degree ").append(d.degree());
+        if (d.mechanisms() > 0) sb.append(", ").append(d.mechanisms()).append(d.mechanisms() == 1 ? " mechanism" : " mechanisms");
+        if (d.classification() == Determinacy.Classification.UNSTABLE && d.degree() > 0) {
+            sb.append(" (and ").append(d.degree()).append(" redundant").append(d.degree() == 1 ? "" : "s").append(")");
+        }
+        sb.append('\n');
+        sb.append(wrap("  equations " + d.equations() + ", unknowns " + d.unknowns() + ", rank " + d.rank()
+                + "; counting formula gives " + d.countingDegree(), "    "));
+        if (!d.remark().isEmpty()) sb.append(wrap("  " + d.remark(), "    "));
+        int k = 1;
+        for (Determinacy.Mechanism m : d.shapes()) {
+            sb.append(wrap("  mechanism " + (k++) + ": " + m.description(), "    "));
+            if (k > 10) {
+                sb.append("  (" + (d.shapes().size() - 10) + " more mechanisms not listed)\n");
+                break;
+            }
+        }
+        return sb.toString();
+    }
+
+    public static String summary(Review r, String engines, Double agreement) {
+        Model m = r.analysis().model();
+        UnitSystem u = m.units();
+        StringBuilder sb = new StringBuilder();
+        sb.append("Plumbline ").append(ResultsTree.TOOL_VERSION).append(" independent check\n");
+        if (!m.job().title().isEmpty()) sb.append(wrap("Job: " + m.job().title(), "  "));
+        sb.append(wrap("Model: " + m.file() + " (" + m.nodes().size() + " nodes, " + m.members().size() + " members, "
+                + m.loadCases().size() + " load cases, " + m.combinations().size() + " combinations)", "  "));
+        sb.append(determinacy(r.analysis().determinacy()));
+        r.analysis().engines().forEach((k, v) -> {
+            if (!v.stable()) sb.append(wrap(k + " method: " + v.instability(), "  "));
+        });
+        if (r.analysis().stable()) {
+            double worst = 0;
+            String primary = r.analysis().primaryEngine();
+            for (var s : r.analysis().solutions().get(primary).values()) worst = Math.max(worst, s.equilibriumResidual());
+            sb.append(String.format(Locale.ROOT, "Solved by: %s; equilibrium residual at most %.1e of the load%n", engines, worst));
+            if (agreement != null) {
+                sb.append(String.format(Locale.ROOT, "Engines agree to %.1e (largest relative difference)%n", agreement));
+            }
+        }
+        if (!r.equilibrium().isEmpty()) sb.append("Equilibrium of claimed reactions:\n");
+        for (ClaimedEquilibrium e : r.equilibrium()) {
+            String line = "  " + e.combo() + ": ";
+            if (!e.checkedFx() && !e.checkedFy() && !e.checkedMoment()) line += e.note();
+            else {
+                line += (e.balanced() ? "balanced" : "OUT OF BALANCE");
+                if (e.checkedFx()) line += String.format(Locale.ROOT, "; sum Fx %s", fmt(u.fromInternal(e.sumFxN(), plumbline.units.Dimension.FORCE)));
+                if (e.checkedFy()) line += String.format(Locale.ROOT, ", sum Fy %s", fmt(u.fromInternal(e.sumFyN(), plumbline.units.Dimension.FORCE)));
+                if (e.checkedMoment()) line += String.format(Locale.ROOT, ", sum M about %s %s", e.referenceNode(),
+                        fmt(u.fromInternal(e.sumMomentNm(), plumbline.units.Dimension.MOMENT)));
+                line += " " + u.force().symbol();
+                if (!e.note().isEmpty()) line += "; " + e.note();
+            }
+            sb.append(wrap(line, "    "));
+        }
+        if (!r.claims().isEmpty()) {
+            sb.append("Claims (claimed / computed, model units):\n");
+            for (ClaimResult c : r.claims()) {
+                Claim cl = c.claim();
+                String flag = c.status() == ClaimResult.Status.OK ? "  ok  " : c.status() == ClaimResult.Status.MARGINAL ? "? MARG" : "X MISM";
+                String unit = u.symbol(cl.dimension());
+                String line = String.format(Locale.ROOT, "%s %s %s %s %s: %s / %s %s (%s, tol %s)", flag, cl.item().word,
+                        cl.name(), cl.quantity(), cl.combo(), fmt(u.fromInternal(cl.valueInternal(), cl.dimension())),
+                        fmt(u.fromInternal(c.computed(), cl.dimension())), unit, pct(c.relativeDifference()),
+                        pct(c.tolerance().relative()));
+                sb.append(wrap(line, "         "));
+                if (c.diagnosis() != null) sb.append(wrap("         likely: " + c.diagnosis(), "         "));
+            }
+            long ok = r.claims().stream().filter(c -> c.status() == ClaimResult.Status.OK).count();
+            long mg = r.claims().stream().filter(c -> c.status() == ClaimResult.Status.MARGINAL).count();
+            long mm = r.claims().stream().filter(c -> c.status() == ClaimResult.Status.MISMATCH).count();
+            sb.append(String.format(Locale.ROOT, "Claims: %d ok, %d marginal, %d mismatch%n", ok, mg, mm));
+        }
+        sb.append("Verdict: ").append(r.verdict().toUpperCase(Locale.ROOT)).append('\n');
+        sb.append(wrap("Caution: an independent check of a simplified linear-elastic model; it does not replace the "
+                + "engineer of record, licensed review or local codes.", "  "));
+        return sb.toString();
+    }
+
+    static String pct(double rel) {
+        if (!Double.isFinite(rel)) return "n/a";
+        return String.format(Locale.ROOT, rel < 0.001 ? "%.2g%%" : "%.1f%%", rel * 100);
+    }
+
+    /** Four significant digits, no exponent for ordinary engineering magnitudes. */
+    public static String fmt(double v) {
+        if (!Double.isFinite(v)) return "n/a";
+        double a = Math.abs(v);
+        if (a == 0) return "0";
+        if (a >= 1e-3 && a < 1e7) {
+            int digits = Math.max(0, 3 - (int) Math.floor(Math.log10(a)));
+            return String.format(Locale.ROOT, "%." + digits + "f", v);
+        }
+        return String.format(Locale.ROOT, "%.3e", v);
+    }
+
+    /** Wraps a line at word boundaries to {@link #WIDTH}, continuation lines indented. */
+    public static String wrap(String text, String indent) {
+        List<String> lines = new ArrayList<>();
+        String rest = text;
+        boolean first = true;
+        while (true) {
+            String prefix = first ? "" : indent;
+            int room = WIDTH - prefix.length();
+            if (rest.length() <= room) {
+                lines.add(prefix + rest);
+                break;
+            }
+            int cut = rest.lastIndexOf(' ', room);
+            if (cut <= 0) cut = room;
+            lines.add(prefix + rest.substring(0, cut));
+            rest = rest.substring(cut).trim();
+            first = false;
+        }
+        return String.join("\n", lines) + "\n";
+    }
+}

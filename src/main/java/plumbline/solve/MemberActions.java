@@ -1,0 +1,188 @@
+package plumbline.solve;
+
+import java.util.ArrayList;
+import java.util.List;
+import plumbline.model.LoadCase;
+import plumbline.model.LoadDirection;
+import plumbline.model.Material;
+import plumbline.model.Member;
+import plumbline.model.MemberLoad;
+import plumbline.model.Model;
+import plumbline.model.Node;
+import plumbline.model.Section;
+import plumbline.model.Temperature;
+
+/**
+ * The loads on one member resolved into its local axes (x along the member, y its normal
+ * turned counter-clockwise), in N, N/m and N*m, per unit member length; plus the free
+ * thermal strain and curvature. This is the shared description of member loads: both
+ * engines start from it, and nothing of their solving is in it.
+ *
+ * <p>A global load (gx, gy) has local components (gx cx + gy cy, -gx cy + gy cx) where
+ * (cx, cy) is the member's unit vector. A load given per plan (per unit horizontal
+ * projection) is |cx| times as intense per unit member length.
+ */
+public record MemberActions(double lengthM, List<Linear> distributed, List<Point> points, List<Couple> couples,
+                            double thermalStrain, double thermalCurvaturePerM) {
+
+    public MemberActions {
+        distributed = List.copyOf(distributed);
+        points = List.copyOf(points);
+        couples = List.copyOf(couples);
+    }
+
+    /** Linearly varying load from a to b: axial p and transverse q intensities (N/m) at a and at b. */
+    public record Linear(double aM, double bM, double p1, double p2, double q1, double q2) {
+        public Linear scaled(double f) {
+            return new Linear(aM, bM, p1 * f, p2 * f, q1 * f, q2 * f);
+        }
+    }
+
+    /** Concentrated force at a: axial px and transverse qy (N). */
+    public record Point(double aM, double px, double qy) {
+        public Point scaled(double f) {
+            return new Point(aM, px * f, qy * f);
+        }
+    }
+
+    /** Concentrated couple at a, counter-clockwise positive (N*m). */
+    public record Couple(double aM, double mz) {
+        public Couple scaled(double f) {
+            return new Couple(aM, mz * f);
+        }
+    }
+
+    public static MemberActions none(double lengthM) {
+        return new MemberActions(lengthM, List.of(), List.of(), List.of(), 0, 0);
+    }
+
+    public boolean isEmpty() {
+        return distributed.isEmpty() && points.isEmpty() && couples.isEmpty() && thermalStrain == 0
+                && thermalCurvaturePerM == 0;
+    }
+
+    public MemberActions scaled(double f) {
+        return new MemberActions(lengthM, distributed.stream().map(d -> d.scaled(f)).toList(),
+                points.stream().map(p -> p.scaled(f)).toList(), couples.stream().map(c -> c.scaled(f)).toList(),
+                thermalStrain * f, thermalCurvaturePerM * f);
+    }
+
+    public MemberActions plus(MemberActions o) {
+        List<Linear> d = new ArrayList<>(distributed);
+        d.addAll(o.distributed);
+        List<Point> p = new ArrayList<>(points);
+        p.addAll(o.points);
+        List<Couple> c = new ArrayList<>(couples);
+        c.addAll(o.couples);
+        return new MemberActions(lengthM, d, p, c, thermalStrain + o.thermalStrain,
+                thermalCurvaturePerM + o.thermalCurvaturePerM);
+    }
+
+    /** Resultant local forces and moment about the start: {sum px, sum qy, moment about x=0 (ccw)}. */
+    public double[] resultantAboutStart() {
+        double fx = 0, fy = 0, m = 0;
+        for (Linear l : distributed) {
+            double len = l.bM - l.aM;
+            fx += 0.5 * (l.p1 + l.p2) * len;
+            double fq = 0.5 * (l.q1 + l.q2) * len;
+            fy += fq;
+            // centroid of a trapezoid from a: len (q1 + 2 q2) / (3 (q1 + q2)); moment = integral q(x) x dx
+            m += l.q1 * len * (l.aM + len / 2) + (l.q2 - l.q1) * len / 2 * (l.aM + 2 * len / 3);
+        }
+        for (Point p : points) {
+            fx += p.px;
+            fy += p.qy;
+            m += p.qy * p.aM;
+        }
+        for (Couple c : couples) m += c.mz;
+        return new double[]{fx, fy, m};
+    }
+
+    /** The member's unit vector {cx, cy}. */
+    public static double[] direction(Model model, Member m) {
+        Node a = model.node(m.from()), b = model.node(m.to());
+        double len = Math.hypot(b.xM() - a.xM(), b.yM() - a.yM());
+        return new double[]{(b.xM() - a.xM()) / len, (b.yM() - a.yM()) / len};
+    }
+
+    /** The local actions of load case {@code c} on every member, keyed by member name (members with none are absent). */
+    public static java.util.Map<String, MemberActions> of(Model model, LoadCase c) {
+        java.util.Map<String, List<MemberLoad>> byMember = new java.util.HashMap<>();
+        for (MemberLoad l : c.memberLoads()) byMember.computeIfAbsent(l.member(), k -> new ArrayList<>()).add(l);
+        java.util.Map<String, List<Temperature>> temps = new java.util.HashMap<>();
+        for (Temperature t : c.temperatures()) temps.computeIfAbsent(t.member(), k -> new ArrayList<>()).add(t);
+        java.util.Map<String, MemberActions> out = new java.util.LinkedHashMap<>();
+        for (Member m : model.members().values()) {
+            List<MemberLoad> loads = byMember.getOrDefault(m.name(), List.of());
+            List<Temperature> ts = temps.getOrDefault(m.name(), List.of());
+            if (loads.isEmpty() && ts.isEmpty() && !c.selfWeight()) continue;
+            MemberActions a = of(model, m, loads, ts, c.selfWeight());
+            if (!a.isEmpty()) out.put(m.name(), a);
+        }
+        return out;
+    }
+
+    static MemberActions of(Model model, Member m, List<MemberLoad> loads, List<Temperature> temps, boolean selfWeight) {
+        double len = model.lengthM(m);
+        double[] d = direction(model, m);
+        double cx = d[0], cy = d[1];
+        List<Linear> dist = new ArrayList<>();
+        List<Point> pts = new ArrayList<>();
+        List<Couple> cps = new ArrayList<>();
+        for (MemberLoad l : loads) {
+            if (l instanceof MemberLoad.Distributed w) {
+                double scale = w.perPlan() ? Math.abs(cx) : 1.0;
+                double[] a = local(w.dir(), w.w1NPerM() * scale, cx, cy);
+                double[] b = local(w.dir(), w.w2NPerM() * scale, cx, cy);
+                dist.add(new Linear(w.fromM(), w.toM(), a[0], b[0], a[1], b[1]));
+            } else if (l instanceof MemberLoad.Point p) {
+                double[] a = local(p.dir(), p.forceN(), cx, cy);
+                pts.add(new Point(p.atM(), a[0], a[1]));
+            } else if (l instanceof MemberLoad.Couple c) {
+                cps.add(new Couple(c.atM(), c.momentNm()));
+            }
+        }
+        if (selfWeight) {
+            Section s = model.sectionOf(m);
+            Material mat = model.materialOf(m);
+            double w = mat.weightDensityNPerM3() * s.areaM2();
+            if (w != 0) {
+                double[] a = local(LoadDirection.GRAVITY, w, cx, cy);
+                dist.add(new Linear(0, len, a[0], a[0], a[1], a[1]));
+            }
+        }
+        double strain = 0, curvature = 0;
+        for (Temperature t : temps) {
+            Material mat = model.materialOf(m);
+            strain += mat.alphaPerK() * t.uniformK();
+            if (t.gradientK() != 0) {
+                // top (local +y) warmer lengthens the top fibre: the member curves concave towards -y
+                curvature += -mat.alphaPerK() * t.gradientK() / model.sectionOf(m).depthM();
+            }
+        }
+        return new MemberActions(len, dist, pts, cps, strain, curvature);
+    }
+
+    /** A load of intensity v in direction dir, as local {axial, transverse} components. */
+    static double[] local(LoadDirection dir, double v, double cx, double cy) {
+        double gx, gy;
+        switch (dir) {
+            case LOCAL_X:
+                return new double[]{v, 0};
+            case LOCAL_Y:
+                return new double[]{0, v};
+            case X:
+                gx = v;
+                gy = 0;
+                break;
+            case GRAVITY:
+                gx = 0;
+                gy = -v;
+                break;
+            default:
+                gx = 0;
+                gy = v;
+        }
+        return new double[]{gx * cx + gy * cy, -gx * cy + gy * cx};
+    }
+}

@@ -1,0 +1,22 @@
+package plumbline.solve;
+
+/**
+ * One member's solved state: the forces on its ends in local axes {fx_i, fy_i, m_i, fx_j,
+ * fy_j, m_j} (N, N*m, acting on the member), the transverse displacements of its end
+ * nodes (local y, m), its loads, and the exact functions along it.
+ */
+public record MemberSolution(double[] endForcesLocal, double vStartM, double vEndM, MemberActions actions,
+                             MemberResponse response, Peaks peaks) {
+
+    public static MemberSolution of(double[] endForcesLocal, MemberActions actions, double eiNm2, double vStartM,
+                                    double vEndM) {
+        MemberResponse r = MemberResponse.of(new double[]{endForcesLocal[0], endForcesLocal[1], endForcesLocal[2]},
+                actions, eiNm2, vStartM, vEndM);
+        return new MemberSolution(endForcesLocal.clone(), vStartM, vEndM, actions, r, r.peaks());
+    }
+
+    @Override
+    public double[] endForcesLocal() {
+        return endForcesLocal.clone();
+    }
+}

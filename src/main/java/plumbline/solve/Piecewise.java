@@ -1,0 +1,115 @@
+package plumbline.solve;
+
+import java.util.Arrays;
+
+/**
+ * A function along a member, x from 0 to L (metres): one {@link Poly} per segment between
+ * breakpoints, each written in its own coordinate t = x - x_k. May jump at a breakpoint
+ * (shear at a point load, moment at a couple), so values are taken one-sided there.
+ */
+public final class Piecewise {
+
+    private final double[] x;
+    private final Poly[] pieces;
+
+    public Piecewise(double[] breakpoints, Poly[] pieces) {
+        if (breakpoints.length != pieces.length + 1) throw new IllegalArgumentException("breakpoints and pieces");
+        this.x = breakpoints.clone();
+        this.pieces = pieces.clone();
+    }
+
+    public int segments() {
+        return pieces.length;
+    }
+
+    public double start(int k) {
+        return x[k];
+    }
+
+    public double end(int k) {
+        return x[k + 1];
+    }
+
+    public Poly piece(int k) {
+        return pieces[k];
+    }
+
+    public double length() {
+        return x[x.length - 1];
+    }
+
+    /** Value at x, taking the segment to the right at an interior breakpoint. */
+    public double at(double xm) {
+        int k = Arrays.binarySearch(x, xm);
+        if (k < 0) k = -k - 2;
+        k = Math.max(0, Math.min(pieces.length - 1, k));
+        return pieces[k].at(xm - x[k]);
+    }
+
+    /** Value at x approached from the left (for the end of the member, the value at L). */
+    public double atLeft(double xm) {
+        int k = Arrays.binarySearch(x, xm);
+        if (k < 0) k = -k - 2;
+        else k = k - 1;
+        k = Math.max(0, Math.min(pieces.length - 1, k));
+        return pieces[k].at(xm - x[k]);
+    }
+
+    /** An extreme value and where it occurs. */
+    public record Extreme(double value, double xM) {
+    }
+
+    /** Largest value over [0, L], one-sided limits at breakpoints included; exact. */
+    public Extreme max() {
+        return extreme(1.0);
+    }
+
+    public Extreme min() {
+        Extreme e = extreme(-1.0);
+        return new Extreme(-e.value, e.xM);
+    }
+
+    /** Largest magnitude, with its sign. */
+    public Extreme absMax() {
+        Extreme hi = max(), lo = min();
+        return Math.abs(lo.value) > Math.abs(hi.value) ? lo : hi;
+    }
+
+    private Extreme extreme(double sign) {
+        double best = Double.NEGATIVE_INFINITY, where = 0;
+        for (int k = 0; k < pieces.length; k++) {
+            double h = x[k + 1] - x[k];
+            Poly p = pieces[k];
+            double[] cand = p.derivative().rootsIn(h);
+            double[] ts = Arrays.copyOf(cand, cand.length + 2);
+            ts[cand.length] = 0;
+            ts[cand.length + 1] = h;
+            for (double t : ts) {
+                double v = sign * p.at(t);
+                if (v > best) {
+                    best = v;
+                    where = x[k] + t;
+                }
+            }
+        }
+        return new Extreme(best, where);
+    }
+
+    /** Exact integral of this function times {@code other} over [0, L]; both must share breakpoints. */
+    public double integrateProduct(Piecewise other) {
+        if (!Arrays.equals(x, other.x)) throw new IllegalArgumentException("breakpoints differ");
+        double s = 0;
+        for (int k = 0; k < pieces.length; k++) s += pieces[k].times(other.pieces[k]).integrate(x[k + 1] - x[k]);
+        return s;
+    }
+
+    public double integrate() {
+        double s = 0;
+        for (int k = 0; k < pieces.length; k++) s += pieces[k].integrate(x[k + 1] - x[k]);
+        return s;
+    }
+
+    public double[] breakpoints() {
+        return x.clone();
+    }
+}

@@ -1,0 +1,131 @@
+package plumbline.solve;
+
+import java.util.Arrays;
+
+/**
+ * A real polynomial c0 + c1 t + c2 t^2 + ... in a local coordinate t (a segment's own
+ * origin keeps the coefficients well conditioned). Immutable.
+ */
+public final class Poly {
+
+    public static final Poly ZERO = new Poly(new double[]{0.0});
+
+    private final double[] c;
+
+    public Poly(double... coefficients) {
+        int n = coefficients.length;
+        while (n > 1 && coefficients[n - 1] == 0.0) n--;
+        this.c = Arrays.copyOf(coefficients, Math.max(n, 1));
+    }
+
+    public int degree() {
+        return c.length - 1;
+    }
+
+    public double coefficient(int k) {
+        return k < c.length ? c[k] : 0.0;
+    }
+
+    public double at(double t) {
+        double v = 0;
+        for (int k = c.length - 1; k >= 0; k--) v = v * t + c[k];
+        return v;
+    }
+
+    public Poly plus(Poly o) {
+        double[] r = new double[Math.max(c.length, o.c.length)];
+        for (int k = 0; k < r.length; k++) r[k] = coefficient(k) + o.coefficient(k);
+        return new Poly(r);
+    }
+
+    public Poly times(double s) {
+        double[] r = c.clone();
+        for (int k = 0; k < r.length; k++) r[k] *= s;
+        return new Poly(r);
+    }
+
+    public Poly times(Poly o) {
+        double[] r = new double[c.length + o.c.length - 1];
+        for (int i = 0; i < c.length; i++) for (int j = 0; j < o.c.length; j++) r[i + j] += c[i] * o.c[j];
+        return new Poly(r);
+    }
+
+    /** The antiderivative that is {@code value0} at t = 0. */
+    public Poly integral(double value0) {
+        double[] r = new double[c.length + 1];
+        r[0] = value0;
+        for (int k = 0; k < c.length; k++) r[k + 1] = c[k] / (k + 1);
+        return new Poly(r);
+    }
+
+    public Poly derivative() {
+        if (c.length == 1) return ZERO;
+        double[] r = new double[c.length - 1];
+        for (int k = 1; k < c.length; k++) r[k - 1] = c[k] * k;
+        return new Poly(r);
+    }
+
+    /** The same polynomial written in s = t - shift (a Taylor shift). */
+    public Poly shifted(double shift) {
+        double[] r = c.clone();
+        int n = r.length;
+        for (int i = 0; i < n; i++) for (int k = n - 2; k >= i; k--) r[k] += shift * r[k + 1];
+        return new Poly(r);
+    }
+
+    /** Exact integral over [0, h]. */
+    public double integrate(double h) {
+        return integral(0.0).at(h);
+    }
+
+    /**
+     * The real roots in the open interval (0, h), found by isolating them between the
+     * roots of the derivative (on each monotone piece there is at most one) and
+     * bisecting each to machine precision.
+     */
+    public double[] rootsIn(double h) {
+        if (degree() == 0) return new double[0];
+        if (degree() == 1) {
+            double t = -c[0] / c[1];
+            return t > 0 && t < h ? new double[]{t} : new double[0];
+        }
+        double[] crit = derivative().rootsIn(h);
+        double[] pts = new double[crit.length + 2];
+        pts[0] = 0;
+        System.arraycopy(crit, 0, pts, 1, crit.length);
+        pts[pts.length - 1] = h;
+        double[] out = new double[pts.length];
+        int n = 0;
+        for (int i = 0; i + 1 < pts.length; i++) {
+            double a = pts[i], b = pts[i + 1], fa = at(a), fb = at(b);
+            if (fa == 0 && a > 0) {
+                if (n == 0 || out[n - 1] != a) out[n++] = a;
+                continue;
+            }
+            if (fa * fb >= 0) continue;
+            for (int it = 0; it < 200 && b - a > 0; it++) {
+                double mid = 0.5 * (a + b);
+                if (mid <= a || mid >= b) break;
+                double fm = at(mid);
+                if (fm == 0) {
+                    a = b = mid;
+                    break;
+                }
+                if ((fm < 0) == (fa < 0)) {
+                    a = mid;
+                    fa = fm;
+                } else {
+                    b = mid;
+                }
+            }
+            double r = 0.5 * (a + b);
+            if (r > 0 && r < h) out[n++] = r;
+        }
+        return Arrays.copyOf(out, n);
+    }
+
+    @Override
+    public String toString() {
+        return Arrays.toString(c);
+    }
+}

@@ -1,0 +1,19 @@
+package plumbline.solve;
+
+import java.util.Map;
+
+/**
+ * The solved state of one load case or combination, all in SI and global axes: node
+ * displacements {ux, uy, rz} (m, m, rad; rz is 0 at a node without rotational stiffness),
+ * support reactions {Fx, Fy, Mz} (force and moment the support exerts on the structure),
+ * member solutions, and the equilibrium residual relative to the loads.
+ */
+public record Solution(String name, Map<String, double[]> displacements, Map<String, double[]> reactions,
+                       Map<String, MemberSolution> members, double equilibriumResidual) {
+
+    public Solution {
+        displacements = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(displacements));
+        reactions = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(reactions));
+        members = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(members));
+    }
+}

@@ -1,0 +1,61 @@
+package plumbline.solve;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import plumbline.model.Member;
+import plumbline.model.Model;
+
+/**
+ * Combinations as superpositions of load-case solutions (linear elasticity, small
+ * displacements): every displacement, reaction and member end force is the factored sum;
+ * member functions are rebuilt from the summed end forces and the factored loads, which is
+ * exact because they are linear in both.
+ */
+public final class Superposition {
+
+    private Superposition() {
+    }
+
+    public static Solution combine(Model model, String name, Map<Solution, Double> parts) {
+        Map<String, double[]> disp = new LinkedHashMap<>(), reac = new LinkedHashMap<>();
+        for (var p : parts.entrySet()) {
+            add(disp, p.getKey().displacements(), p.getValue());
+            add(reac, p.getKey().reactions(), p.getValue());
+        }
+        Map<String, MemberSolution> members = new LinkedHashMap<>();
+        double residual = 0;
+        for (Member m : model.members().values()) {
+            double[] f = new double[6];
+            double vs = 0, ve = 0;
+            MemberActions a = MemberActions.none(model.lengthM(m));
+            double ei = Double.NaN;
+            for (var p : parts.entrySet()) {
+                MemberSolution s = p.getKey().members().get(m.name());
+                double k = p.getValue();
+                double[] fe = s.endForcesLocal();
+                for (int i = 0; i < 6; i++) f[i] += k * fe[i];
+                vs += k * s.vStartM();
+                ve += k * s.vEndM();
+                if (k != 0) a = a.plus(s.actions().scaled(k));
+            }
+            members.put(m.name(), MemberSolution.of(f, a, bendingStiffness(model, m), vs, ve));
+        }
+        Map<String, Double> factors = new LinkedHashMap<>();
+        for (var p : parts.entrySet()) factors.merge(p.getKey().name(), p.getValue(), Double::sum);
+        Solution s = new Solution(name, disp, reac, members, 0);
+        residual = Equilibrium.residual(model, s, Equilibrium.nodeLoads(model, factors));
+        return new Solution(name, disp, reac, members, residual);
+    }
+
+    private static void add(Map<String, double[]> into, Map<String, double[]> from, double k) {
+        for (var e : from.entrySet()) {
+            double[] acc = into.computeIfAbsent(e.getKey(), x -> new double[3]);
+            for (int i = 0; i < 3; i++) acc[i] += k * e.getValue()[i];
+        }
+    }
+
+    /** EI of a member in N*m2, NaN when its section gives no I. */
+    public static double bendingStiffness(Model model, Member m) {
+        return model.materialOf(m).ePa() * model.sectionOf(m).inertiaM4();
+    }
+}

@@ -1,0 +1,164 @@
+package plumbline.statics;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import plumbline.model.Member;
+import plumbline.model.Model;
+import plumbline.model.Node;
+import plumbline.model.Support;
+
+/**
+ * The equilibrium matrix A of a plane model: one row per node equation (sum of forces in x,
+ * in y, and of moments, the moment row only where the node has rotational stiffness), one
+ * column per independent force: per member its axial force N (tension, at the start) and
+ * the end moments it can carry (m_i, m_j, counter-clockwise on the member; none at a
+ * released end), and per support one column per restrained or sprung direction. A column
+ * holds the forces its unit value puts on the nodes, so that A s = -P for node loads P.
+ *
+ * <p>With end moments m_i, m_j the member's end shears are (m_i + m_j)/L on the start
+ * (local +y) and the opposite on the end; the member pushes on its nodes with the
+ * opposite of the forces on its ends.
+ */
+public final class EquilibriumMatrix {
+
+    /** What an unknown is. */
+    public enum Kind { AXIAL, MOMENT_START, MOMENT_END, REACTION }
+
+    /** One unknown: its kind, the member or node it belongs to, and for a reaction the direction (0 ux, 1 uy, 2 rz). */
+    public record Unknown(Kind kind, String owner, int direction, String label) {
+    }
+
+    /** One equation: node and direction (0 Fx, 1 Fy, 2 Mz). */
+    public record Equation(String node, int direction) {
+    }
+
+    private final List<Equation> equations;
+    private final List<Unknown> unknowns;
+    private final double[][] a;
+    private final double lengthScale;
+
+    private EquilibriumMatrix(List<Equation> eqs, List<Unknown> unk, double[][] a, double lengthScale) {
+        this.equations = List.copyOf(eqs);
+        this.unknowns = List.copyOf(unk);
+        this.a = a;
+        this.lengthScale = lengthScale;
+    }
+
+    public List<Equation> equations() {
+        return equations;
+    }
+
+    public List<Unknown> unknowns() {
+        return unknowns;
+    }
+
+    /** Entry (row, column) in SI (N per N, or N per N*m, or N*m per N). */
+    public double get(int row, int col) {
+        return a[row][col];
+    }
+
+    /** The characteristic length (m) used to make moment rows and columns commensurate with forces. */
+    public double lengthScale() {
+        return lengthScale;
+    }
+
+    public double[][] copy() {
+        double[][] c = new double[a.length][];
+        for (int i = 0; i < a.length; i++) c[i] = a[i].clone();
+        return c;
+    }
+
+    public static EquilibriumMatrix of(Model model) {
+        Map<String, boolean[]> rotation = new HashMap<>();
+        for (Node n : model.nodes().values()) rotation.put(n.name(), new boolean[1]);
+        for (Member m : model.members().values()) {
+            if (!m.releasedStart()) rotation.get(m.from())[0] = true;
+            if (!m.releasedEnd()) rotation.get(m.to())[0] = true;
+        }
+        for (Support s : model.supports().values()) if (s.reacts(2)) rotation.get(s.node())[0] = true;
+        List<Equation> eqs = new ArrayList<>();
+        Map<String, Integer> row = new HashMap<>();
+        for (Node n : model.nodes().values()) {
+            row.put(n.name(), eqs.size());
+            eqs.add(new Equation(n.name(), 0));
+            eqs.add(new Equation(n.name(), 1));
+            if (rotation.get(n.name())[0]) eqs.add(new Equation(n.name(), 2));
+        }
+        List<Unknown> unk = new ArrayList<>();
+        for (Member m : model.members().values()) {
+            unk.add(new Unknown(Kind.AXIAL, m.name(), -1, m.name() + ".N"));
+            if (!m.releasedStart()) unk.add(new Unknown(Kind.MOMENT_START, m.name(), -1, m.name() + ".M_start"));
+            if (!m.releasedEnd()) unk.add(new Unknown(Kind.MOMENT_END, m.name(), -1, m.name() + ".M_end"));
+        }
+        String[] dirs = {"Fx", "Fy", "Mz"};
+        for (Support s : model.supports().values()) {
+            for (int d = 0; d < 3; d++) if (s.reacts(d)) unk.add(new Unknown(Kind.REACTION, s.node(), d, s.node() + "." + dirs[d]));
+        }
+        double[][] a = new double[eqs.size()][unk.size()];
+        for (int c = 0; c < unk.size(); c++) {
+            Unknown u = unk.get(c);
+            if (u.kind() == Kind.REACTION) {
+                Support s = model.supports().get(u.owner());
+                int r = row.get(u.owner());
+                double cs = Math.cos(s.angleRad()), sn = Math.sin(s.angleRad());
+                if (u.direction() == 0) {
+                    a[r][c] = cs;
+                    a[r + 1][c] = sn;
+                } else if (u.direction() == 1) {
+                    a[r][c] = -sn;
+                    a[r + 1][c] = cs;
+                } else {
+                    a[r + 2][c] = 1;
+                }
+                continue;
+            }
+            Member m = model.member(u.owner());
+            double[] f = unitEndForces(model, m, u.kind());
+            put(a, row, rotation, model, m, f, c);
+        }
+        return new EquilibriumMatrix(eqs, unk, a, extent(model));
+    }
+
+    /**
+     * Local end forces on the member {fx_i, fy_i, m_i, fx_j, fy_j, m_j} for a unit value of
+     * one of its independent forces, with no load on it.
+     */
+    public static double[] unitEndForces(Model model, Member m, Kind kind) {
+        double len = model.lengthM(m);
+        return switch (kind) {
+            case AXIAL -> new double[]{-1, 0, 0, 1, 0, 0};
+            case MOMENT_START -> new double[]{0, 1 / len, 1, 0, -1 / len, 0};
+            case MOMENT_END -> new double[]{0, 1 / len, 0, 0, -1 / len, 1};
+            default -> throw new IllegalArgumentException(kind.toString());
+        };
+    }
+
+    /** Adds to column c the forces on the nodes of m from member end forces f (local). */
+    private static void put(double[][] a, Map<String, Integer> row, Map<String, boolean[]> rotation, Model model,
+                            Member m, double[] f, int c) {
+        Node ni = model.node(m.from()), nj = model.node(m.to());
+        double len = model.lengthM(m);
+        double cx = (nj.xM() - ni.xM()) / len, cy = (nj.yM() - ni.yM()) / len;
+        int ri = row.get(m.from()), rj = row.get(m.to());
+        a[ri][c] -= f[0] * cx - f[1] * cy;
+        a[ri + 1][c] -= f[0] * cy + f[1] * cx;
+        if (rotation.get(m.from())[0]) a[ri + 2][c] -= f[2];
+        a[rj][c] -= f[3] * cx - f[4] * cy;
+        a[rj + 1][c] -= f[3] * cy + f[4] * cx;
+        if (rotation.get(m.to())[0]) a[rj + 2][c] -= f[5];
+    }
+
+    static double extent(Model model) {
+        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+        for (Node n : model.nodes().values()) {
+            minX = Math.min(minX, n.xM());
+            maxX = Math.max(maxX, n.xM());
+            minY = Math.min(minY, n.yM());
+            maxY = Math.max(maxY, n.yM());
+        }
+        return Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-9);
+    }
+}

@@ -1,0 +1,53 @@
+package plumbline.units;
+
+/**
+ * The units of every bare number in a file (FORMAT.md section 1): a force unit and a length
+ * unit, carried to derived dimensions. Bare angles and rotations are in radians (a
+ * support's {@code angle} alone reads a bare number as degrees), bare temperatures in degC.
+ */
+public record UnitSystem(Unit force, Unit length) {
+
+    public static final UnitSystem SI_KN_M = new UnitSystem(new Unit("kN", Dimension.FORCE, 1e3),
+            new Unit("m", Dimension.LENGTH, 1.0));
+
+    public UnitSystem {
+        if (!force.dimension().equals(Dimension.FORCE)) throw new IllegalArgumentException("force unit " + force.symbol());
+        if (!length.dimension().equals(Dimension.LENGTH)) throw new IllegalArgumentException("length unit " + length.symbol());
+    }
+
+    /** Factor from a bare number of dimension {@code d} in this system to internal units. */
+    public double factor(Dimension d) {
+        double f = Math.pow(force.toInternal(), d.force()) * Math.pow(length.toInternal(), d.length());
+        return f;
+    }
+
+    public double toInternal(double bare, Dimension d) {
+        return bare * factor(d);
+    }
+
+    /** Internal value expressed as a bare number of this system (angles in radians). */
+    public double fromInternal(double internal, Dimension d) {
+        double f = Math.pow(force.toInternal(), d.force()) * Math.pow(length.toInternal(), d.length());
+        return internal / f;
+    }
+
+    /** The written symbol of a derived dimension in this system, e.g. kN*m, kN/m. */
+    public String symbol(Dimension d) {
+        StringBuilder num = new StringBuilder(), den = new StringBuilder();
+        part(d.force(), force.symbol(), num, den);
+        part(d.length(), length.symbol(), num, den);
+        if (d.angle() < 0) part(d.angle(), "rad", num, den);
+        if (d.temperature() != 0) part(d.temperature(), "degC", num, den);
+        String n = num.length() == 0 ? "1" : num.toString();
+        if (d.equals(Dimension.NONE)) return "";
+        return den.length() == 0 ? n : n + "/" + den;
+    }
+
+    private static void part(int exp, String sym, StringBuilder num, StringBuilder den) {
+        if (exp == 0) return;
+        StringBuilder sb = exp > 0 ? num : den;
+        if (sb.length() > 0) sb.append('*');
+        sb.append(sym);
+        if (Math.abs(exp) != 1) sb.append(Math.abs(exp));
+    }
+}

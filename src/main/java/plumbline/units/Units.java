@@ -1,0 +1,151 @@
+package plumbline.units;
+
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * The unit symbols Plumbline reads and the parser for unit and quantity strings.
+ *
+ * <p>Factors to SI are exact by definition (1 in = 0.0254 m, 1 lbf = 0.45359237 kg x
+ * 9.80665 m/s2) or derived from those, as listed in NIST Special Publication 811 (2008),
+ * Appendix B.
+ *
+ * <p>Grammar: a product of symbols joined by {@code *}, {@code .} or {@code -}, each with an
+ * optional power ({@code m^2}, {@code mm4}); one {@code /} puts everything after it in the
+ * denominator ({@code kN*m/rad}, {@code kN/m2}); a leading {@code /} means one over the
+ * rest ({@code /degC}).
+ */
+public final class Units {
+
+    /** Exactly 0.45359237 kg x 9.80665 m/s2 (NIST SP 811, B.8: 4.448222 N). */
+    public static final double LBF_IN_N = 0.45359237 * 9.80665;
+    public static final double INCH_IN_M = 0.0254;
+    public static final double FOOT_IN_M = 0.3048;
+
+    private static final Map<String, Unit> SYMBOLS = new LinkedHashMap<>();
+
+    static {
+        Dimension f = Dimension.FORCE, l = Dimension.LENGTH, s = Dimension.STRESS;
+        put("N", f, 1.0);
+        put("kN", f, 1e3);
+        put("MN", f, 1e6);
+        put("lbf", f, LBF_IN_N);
+        put("lb", f, LBF_IN_N);
+        put("kip", f, 1e3 * LBF_IN_N);
+        put("kips", f, 1e3 * LBF_IN_N);
+        put("mm", l, 1e-3);
+        put("cm", l, 1e-2);
+        put("m", l, 1.0);
+        put("in", l, INCH_IN_M);
+        put("ft", l, FOOT_IN_M);
+        put("Pa", s, 1.0);
+        put("kPa", s, 1e3);
+        put("MPa", s, 1e6);
+        put("GPa", s, 1e9);
+        put("psi", s, LBF_IN_N / (INCH_IN_M * INCH_IN_M));
+        put("ksi", s, 1e3 * LBF_IN_N / (INCH_IN_M * INCH_IN_M));
+        put("psf", s, LBF_IN_N / (FOOT_IN_M * FOOT_IN_M));
+        put("ksf", s, 1e3 * LBF_IN_N / (FOOT_IN_M * FOOT_IN_M));
+        put("pcf", Dimension.WEIGHT_DENSITY, LBF_IN_N / Math.pow(FOOT_IN_M, 3));
+        put("plf", Dimension.FORCE_PER_LENGTH, LBF_IN_N / FOOT_IN_M);
+        put("klf", Dimension.FORCE_PER_LENGTH, 1e3 * LBF_IN_N / FOOT_IN_M);
+        put("rad", Dimension.ANGLE, 1.0);
+        put("deg", Dimension.ANGLE, Math.PI / 180.0);
+        put("degC", Dimension.TEMPERATURE, 1.0);
+        put("K", Dimension.TEMPERATURE, 1.0);
+        put("degF", Dimension.TEMPERATURE, 5.0 / 9.0);
+    }
+
+    private static void put(String symbol, Dimension d, double factor) {
+        SYMBOLS.put(symbol, new Unit(symbol, d, factor));
+    }
+
+    private Units() {
+    }
+
+    /** The symbols accepted, in a stable order, for {@code plumbline units}. */
+    public static Map<String, Unit> symbols() {
+        return Map.copyOf(SYMBOLS);
+    }
+
+    public static Iterable<Unit> listed() {
+        return SYMBOLS.values();
+    }
+
+    private static final Pattern TERM = Pattern.compile("([A-Za-z]+)(?:\\^(-?\\d+)|(\\d+))?");
+
+    /** Parses a unit string such as {@code kN*m/rad}; the message names the part not understood. */
+    public static Unit parse(String text) throws UnitParseException {
+        String t = text.trim();
+        if (t.isEmpty()) throw new UnitParseException("empty unit");
+        String[] parts = t.split("/", -1);
+        if (parts.length > 2) {
+            throw new UnitParseException("unit '" + text + "' has more than one '/'; write e.g. kN/m2 or kN*m/rad");
+        }
+        Unit num = parts[0].trim().isEmpty() && parts.length == 2
+                ? new Unit("", Dimension.NONE, 1.0) : product(parts[0], text);
+        if (parts.length == 1) return new Unit(t, num.dimension(), num.toInternal());
+        Unit den = product(parts[1], text);
+        Unit u = num.times(den.power(-1));
+        return new Unit(t, u.dimension(), u.toInternal());
+    }
+
+    private static Unit product(String part, String whole) throws UnitParseException {
+        String p = part.trim();
+        if (p.isEmpty()) throw new UnitParseException("unit '" + whole + "' has an empty part around '/'");
+        Unit acc = new Unit("", Dimension.NONE, 1.0);
+        for (String term : p.split("[*.\\-\\u00b7](?![0-9])|\\s+")) {
+            if (term.isEmpty()) throw new UnitParseException("unit '" + whole + "' has an empty factor");
+            Matcher m = TERM.matcher(term);
+            if (!m.matches()) throw new UnitParseException("unit '" + whole + "': cannot read '" + term + "'");
+            Unit base = SYMBOLS.get(m.group(1));
+            if (base == null) base = SYMBOLS.get(caseFold(m.group(1)));
+            if (base == null) {
+                throw new UnitParseException("unknown unit symbol '" + m.group(1) + "' in '" + whole
+                        + "'; known: " + String.join(" ", SYMBOLS.keySet()));
+            }
+            int power = 1;
+            if (m.group(2) != null) power = Integer.parseInt(m.group(2));
+            else if (m.group(3) != null) power = Integer.parseInt(m.group(3));
+            if (power == 0 || Math.abs(power) > 6) {
+                throw new UnitParseException("unit '" + whole + "': power " + power + " of " + m.group(1) + " is not usable");
+            }
+            acc = acc.times(base.power(power));
+        }
+        return acc;
+    }
+
+    /** Accepts e.g. "KN" or "Kip" only where the fold is unambiguous (never mm against Mm). */
+    private static String caseFold(String s) {
+        String lower = s.toLowerCase(Locale.ROOT);
+        for (String k : SYMBOLS.keySet()) {
+            if (k.toLowerCase(Locale.ROOT).equals(lower) && !k.equals("MN") && !k.equals("mm")
+                    && !k.equals("MPa") && !k.equals("Pa")) {
+                return k;
+            }
+        }
+        return s;
+    }
+
+    private static final Pattern QUANTITY = Pattern.compile(
+            "\\s*([+-]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*?)\\s*");
+
+    /** A number and the unit written after it (the unit may be absent: then {@code unit} is null). */
+    public record Written(double value, Unit unit) {
+    }
+
+    /** Parses {@code "<number> <unit>"}; a bare number has a null unit. */
+    public static Written parseQuantity(String text) throws UnitParseException {
+        Matcher m = QUANTITY.matcher(text);
+        if (!m.matches()) {
+            throw new UnitParseException("'" + text + "' is not a number followed by a unit (e.g. '12.5 kN/m')");
+        }
+        double v = Double.parseDouble(m.group(1));
+        if (!Double.isFinite(v)) throw new UnitParseException("'" + text + "' is not a finite number");
+        String u = m.group(2);
+        return new Written(v, u.isEmpty() ? null : parse(u));
+    }
+}
