@@ -383,7 +383,19 @@ public final class ModelReader {
             } else if (sec != null && sections.containsKey(sec) && Double.isNaN(sections.get(sec).inertiaM4())) {
                 f.problem(f.at("section"), "section", "section '" + sec + "' has no I; a frame member needs I (or set truss: true)");
             }
+            if (from != null && from.equals(to)) {
+                problems.add(new Problem(e.keyAt(), path, "starts and ends at node " + from + "; expected two different nodes"));
+            } else if (from != null && to != null && nodes.containsKey(from) && nodes.containsKey(to)) {
+                Node a = nodes.get(from), b = nodes.get(to);
+                if (a.xM() == b.xM() && a.yM() == b.yM()) {
+                    problems.add(new Problem(e.keyAt(), path, "has zero length (nodes " + from + " and " + to
+                            + " are at the same point); expected a member of positive length"));
+                }
+            }
             out.put(e.key(), new Member(e.key(), from, to, sec, hs, he, truss, e.keyAt()));
+        }
+        if (t instanceof Tree.MapNode mn && mn.entries().isEmpty()) {
+            problems.add(new Problem(t.at(), "members", "no members; expected at least one"));
         }
         return out;
     }
@@ -544,7 +556,7 @@ public final class ModelReader {
                 }
                 double a = g.has("from") ? position(g, "from", len, u) : 0.0;
                 double b = g.has("to") ? position(g, "to", len, u) : len;
-                if (!Double.isNaN(a) && !Double.isNaN(b) && !(b > a)) {
+                if (!Double.isNaN(a) && !Double.isNaN(b) && !(b > a) && len > 0) {
                     g.problem(g.at("to"), "to", "load ends at " + fmt(b) + " m, not after its start " + fmt(a)
                             + " m; expected from < to");
                 }
@@ -594,7 +606,7 @@ public final class ModelReader {
         } else {
             x = g.quantity(key, Dimension.LENGTH, u, true);
         }
-        if (Double.isNaN(x) || Double.isNaN(lengthM)) return x;
+        if (Double.isNaN(x) || Double.isNaN(lengthM) || !(lengthM > 0)) return x; // a zero length is reported on the member
         double slack = 1e-9 * lengthM;
         if (x < -slack || x > lengthM + slack) {
             g.problem(t.at(), key, "position " + fmt(u.fromInternal(x, Dimension.LENGTH)) + " " + u.length().symbol()
