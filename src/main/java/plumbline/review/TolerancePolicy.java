@@ -22,6 +22,11 @@ public record TolerancePolicy(double commandLine) {
      * discrepancy (common practice).
      */
     public static final double ABSOLUTE_FLOOR_FRACTION = 0.002;
+    /**
+     * Displacements below this fraction of the model's extent are rounding noise, not
+     * movement (1e-9 of a 10 m frame is 10 nm).
+     */
+    public static final double DISPLACEMENT_NOISE_FRACTION = 1e-9;
     /** Beyond the tolerance but within this multiple of it: marginal. */
     public static final double MARGINAL_FACTOR = 2.0;
 

@@ -1,0 +1,36 @@
+package plumbline.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import plumbline.io.OutputFiles;
+
+/** Every bundled sample runs through check; the planted slip is the only mismatch. */
+class SamplesTest {
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({
+            "footbridge-truss.yaml, footbridge-truss-claims.yaml, M-D1-ULS-N_max",
+            "three-span-beam.yaml, three-span-beam-claims.csv, R-A-SLS-Fy",
+            "portal-frame.yaml, portal-frame-claims.yaml, R-E-ULS-W-Fx",
+    })
+    @SuppressWarnings("unchecked")
+    void sampleRuns(String model, String claims, String slip) throws Exception {
+        Path json = Files.createTempDirectory("plumbline").resolve("r.json");
+        CliRunner r = CliRunner.run("check", "samples/" + model, "--claims", "samples/" + claims, "--json", json.toString());
+        assertEquals(1, r.code(), r.err() + r.out());
+        for (String line : r.out().split("\n")) assertTrue(line.length() <= 80, "80 columns: " + line);
+        Map<String, Object> tree = OutputFiles.parseJson(Files.readString(json));
+        assertEquals("mismatch", tree.get("verdict"));
+        List<Map<String, Object>> cl = (List<Map<String, Object>>) tree.get("claims");
+        for (Map<String, Object> c : cl) {
+            assertEquals(c.get("id").equals(slip) ? "mismatch" : "ok", c.get("status"), c.toString());
+        }
+    }
+}
