@@ -15,6 +15,7 @@ import plumbline.review.Analysis;
 import plumbline.review.Review;
 import plumbline.review.TolerancePolicy;
 import plumbline.solve.Engine;
+import plumbline.solve.force.ForceEngine;
 import plumbline.solve.stiffness.StiffnessEngine;
 
 /** The shared run of {@code check} and {@code solve}: read, analyse, review, write, exit code. */
@@ -26,15 +27,12 @@ final class Run {
     static List<Engine> engines(String method) {
         List<Engine> out = new ArrayList<>();
         if (method.equals("stiffness") || method.equals("both")) out.add(new StiffnessEngine());
+        if (method.equals("force") || method.equals("both")) out.add(new ForceEngine());
         return out;
     }
 
     static int execute(Path model, List<Path> claims, Path json, String method, double tolerance, boolean printClaims,
                        PrintWriter out, PrintWriter err) {
-        if (method.equals("force")) {
-            err.println("plumbline: the force method engine is not available in this version; use --method stiffness");
-            return Main.INTERNAL;
-        }
         Inputs in;
         try {
             in = Inputs.load(model, claims);
@@ -49,6 +47,9 @@ final class Run {
         Review r = Review.of(a, new TolerancePolicy(tolerance));
         String shown = a.primaryEngine();
         Double agreement = null;
+        if (a.solutions().containsKey("stiffness") && a.solutions().containsKey("force")) {
+            agreement = plumbline.review.Agreement.maxRelativeDifference(a.solutions().get("stiffness"), a.solutions().get("force"));
+        }
         if (json != null) {
             Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
             try {
@@ -58,7 +59,8 @@ final class Run {
                 return Main.INTERNAL;
             }
         }
-        out.print(Console.summary(r, shown == null ? "none" : shown + " method", agreement));
+        String names = String.join(" and ", a.solutions().keySet()) + (a.solutions().size() == 1 ? " method" : " methods");
+        out.print(Console.summary(r, a.solutions().isEmpty() ? "none" : names, agreement));
         if (json != null) out.println("Results written to " + json);
         if (!a.stable()) return Main.FLAGGED;
         return r.verdict().equals("ok") ? Main.OK : Main.FLAGGED;

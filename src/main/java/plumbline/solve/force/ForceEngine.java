@@ -1,0 +1,338 @@
+package plumbline.solve.force;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.DecompositionSolver;
+import org.apache.commons.math3.linear.LUDecomposition;
+import org.apache.commons.math3.linear.RealMatrix;
+import plumbline.model.LoadCase;
+import plumbline.model.Member;
+import plumbline.model.Model;
+import plumbline.model.Node;
+import plumbline.model.NodeLoad;
+import plumbline.model.Settlement;
+import plumbline.model.Support;
+import plumbline.solve.Engine;
+import plumbline.solve.EngineResult;
+import plumbline.solve.Equilibrium;
+import plumbline.solve.MemberActions;
+import plumbline.solve.MemberResponse;
+import plumbline.solve.MemberSolution;
+import plumbline.solve.Piecewise;
+import plumbline.solve.Poly;
+import plumbline.solve.Solution;
+import plumbline.statics.EquilibriumMatrix;
+
+/**
+ * The force (flexibility) method. Unknowns are the independent forces of the equilibrium
+ * matrix A (member axial forces and end moments, reactions and spring forces): A x = -p,
+ * with p the node loads plus what each member's loads put on its nodes when it is released
+ * to a simple beam. Redundants z are the columns left after choosing a basis of A
+ * (reactions and end moments are released first, as an engineer would), or those the user
+ * names; every solution is x = x0 + X z, with x0 the primary structure's response to the
+ * loads and X the self-stress states of unit redundants.
+ *
+ * <p>Compatibility comes from virtual work: the flexibility f of each member (unit-load
+ * integrals of n n / EA + m m / EI, exact), its initial deformations e (the integrals of the
+ * unit diagrams against the released member's load diagrams, and the thermal strain and
+ * curvature), spring flexibility 1/k, and the prescribed settlements d of the reaction
+ * components. The equations (X^T F X) z = -X^T (F x0 + e - d) are the classic
+ * delta_ij z_j + Delta_i0 = 0. Node displacements come from unit virtual loads on the
+ * primary structure: u_i = x_i^T (F x + e - d).
+ */
+public final class ForceEngine implements Engine {
+
+    /** Columns whose residual norm after projection falls below this fraction of their own norm add no rank. */
+    static final double INDEPENDENCE_TOLERANCE = 1e-9;
+
+    @Override
+    public String name() {
+        return "force";
+    }
+
+    @Override
+    public EngineResult solve(Model model) {
+        EquilibriumMatrix eq = EquilibriumMatrix.of(model);
+        int m = eq.equations().size(), n = eq.unknowns().size();
+        double lc = eq.lengthScale();
+        List<EquilibriumMatrix.Unknown> unk = eq.unknowns();
+        // choose the basis: axial forces first, then end moments, then reactions; user redundants never
+        List<Integer> order = new ArrayList<>();
+        for (EquilibriumMatrix.Kind k : new EquilibriumMatrix.Kind[]{EquilibriumMatrix.Kind.AXIAL,
+                EquilibriumMatrix.Kind.MOMENT_START, EquilibriumMatrix.Kind.MOMENT_END, EquilibriumMatrix.Kind.REACTION}) {
+            for (int j = 0; j < n; j++) if (unk.get(j).kind() == k) order.add(j);
+        }
+        List<String> named = model.redundants();
+        List<String> notes = new ArrayList<>();
+        for (String r : named) {
+            if (unk.stream().noneMatch(u -> u.label().equals(r))) {
+                return EngineResult.unstable(name(), "redundant '" + r + "' is not an unknown of this model; expected one of "
+                        + String.join(", ", unk.stream().map(EquilibriumMatrix.Unknown::label).toList()));
+            }
+        }
+        double[][] scaled = new double[m][n];
+        for (int i = 0; i < m; i++) {
+            for (int j = 0; j < n; j++) {
+                double v = eq.get(i, j);
+                if (eq.equations().get(i).direction() == 2) v /= lc;
+                if (isMoment(unk.get(j))) v *= lc;
+                scaled[i][j] = v;
+            }
+        }
+        List<Integer> basic = new ArrayList<>();
+        List<double[]> q = new ArrayList<>();
+        for (int j : order) {
+            if (named.contains(unk.get(j).label())) continue;
+            if (basic.size() == m) break;
+            double[] v = new double[m];
+            for (int i = 0; i < m; i++) v[i] = scaled[i][j];
+            double norm0 = norm(v);
+            if (norm0 == 0) continue;
+            for (double[] b : q) {
+                double d = dot(v, b);
+                for (int i = 0; i < m; i++) v[i] -= d * b[i];
+            }
+            for (double[] b : q) { // second pass for orthogonality
+                double d = dot(v, b);
+                for (int i = 0; i < m; i++) v[i] -= d * b[i];
+            }
+            double nv = norm(v);
+            if (nv > INDEPENDENCE_TOLERANCE * norm0) {
+                for (int i = 0; i < m; i++) v[i] /= nv;
+                q.add(v);
+                basic.add(j);
+            }
+        }
+        if (basic.size() < m) {
+            return EngineResult.unstable(name(), "the equilibrium equations have rank " + basic.size() + " < " + m
+                    + (named.isEmpty() ? "" : " with the named redundants released")
+                    + ": no statically admissible primary structure (a mechanism)");
+        }
+        List<Integer> redundant = new ArrayList<>();
+        for (int j = 0; j < n; j++) if (!basic.contains(j)) redundant.add(j);
+        double[][] ab = new double[m][m];
+        for (int i = 0; i < m; i++) for (int k = 0; k < m; k++) ab[i][k] = eq.get(i, basic.get(k));
+        DecompositionSolver primary = new LUDecomposition(new Array2DRowRealMatrix(ab, false), 0).getSolver();
+
+        // self-stress states X (n x r): unit redundant, basic forces from equilibrium
+        int r = redundant.size();
+        double[][] x = new double[n][r];
+        for (int k = 0; k < r; k++) {
+            int j = redundant.get(k);
+            double[] rhs = new double[m];
+            for (int i = 0; i < m; i++) rhs[i] = -eq.get(i, j);
+            double[] xb = primary.solve(new org.apache.commons.math3.linear.ArrayRealVector(rhs, false)).toArray();
+            for (int b = 0; b < m; b++) x[basic.get(b)][k] = xb[b];
+            x[j][k] = 1;
+        }
+        // flexibility of every unknown (block diagonal per member, 1/k per spring)
+        Flexibility flex = Flexibility.of(model, eq);
+        RealMatrix xm = r == 0 ? null : new Array2DRowRealMatrix(x, false);
+        RealMatrix delta = r == 0 ? null : xm.transpose().multiply(new Array2DRowRealMatrix(flex.times(x), false));
+        DecompositionSolver compat = r == 0 ? null : new LUDecomposition(delta, 0).getSolver();
+        if (r > 0 && !compat.isNonSingular()) {
+            return EngineResult.unstable(name(), "the compatibility equations are singular (a redundant with no flexibility)");
+        }
+        // unit virtual loads at every node equation: A_B x_v = -e_i
+        RealMatrix virtualBasic = primary.solve(new Array2DRowRealMatrix(negIdentity(m), false));
+
+        Map<String, Integer> row = new HashMap<>();
+        for (int i = 0; i < m; i++) {
+            EquilibriumMatrix.Equation e = eq.equations().get(i);
+            row.put(e.node() + "/" + e.direction(), i);
+        }
+        Map<String, Solution> cases = new LinkedHashMap<>();
+        StringBuilder working = new StringBuilder();
+        working.append("redundants: ").append(r == 0 ? "none (statically determinate: solved by equilibrium alone)"
+                : String.join(", ", redundant.stream().map(j -> unk.get(j).label()).toList()));
+        notes.add(working.toString());
+        if (r > 0) notes.add("flexibility coefficients delta_ij (SI): " + matrixText(delta.getData()));
+        for (LoadCase c : model.loadCases()) {
+            Map<String, MemberActions> actions = MemberActions.of(model, c);
+            double[] p = new double[m];
+            for (NodeLoad nl : c.nodeLoads()) {
+                p[row.get(nl.node() + "/0")] += nl.fxN();
+                p[row.get(nl.node() + "/1")] += nl.fyN();
+                Integer rz = row.get(nl.node() + "/2");
+                if (rz != null) p[rz] += nl.mzNm();
+            }
+            Map<String, double[]> particular = new HashMap<>();
+            for (var ae : actions.entrySet()) {
+                Member mem = model.member(ae.getKey());
+                double[] fp = released(ae.getValue());
+                particular.put(mem.name(), fp);
+                addToNodes(model, mem, fp, p, row);
+            }
+            double[] rhs = new double[m];
+            for (int i = 0; i < m; i++) rhs[i] = -p[i];
+            double[] xb = primary.solve(new org.apache.commons.math3.linear.ArrayRealVector(rhs, false)).toArray();
+            double[] x0 = new double[n];
+            for (int b = 0; b < m; b++) x0[basic.get(b)] = xb[b];
+            double[] e0 = flex.initialDeformation(model, eq, actions, particular);
+            double[] d = settlements(model, eq, c);
+            double[] fx0 = flex.times(x0);
+            double[] g = new double[n];
+            for (int j = 0; j < n; j++) g[j] = fx0[j] + e0[j] - d[j];
+            double[] z = new double[r];
+            if (r > 0) {
+                double[] delta0 = xm.transpose().operate(g);
+                double[] neg = new double[r];
+                for (int k = 0; k < r; k++) neg[k] = -delta0[k];
+                z = compat.solve(new org.apache.commons.math3.linear.ArrayRealVector(neg, false)).toArray();
+                notes.add("case " + c.name() + ": Delta_i0 = " + vectorText(delta0) + "; redundants = " + vectorText(z));
+            }
+            double[] xs = x0.clone();
+            for (int j = 0; j < n; j++) for (int k = 0; k < r; k++) xs[j] += x[j][k] * z[k];
+            double[] fxs = flex.times(xs);
+            double[] work = new double[n];
+            for (int j = 0; j < n; j++) work[j] = fxs[j] + e0[j] - d[j];
+            // displacement at equation i: the virtual force system's work on the real deformations
+            double[] u = new double[m];
+            for (int i = 0; i < m; i++) {
+                double s = 0;
+                for (int b = 0; b < m; b++) s += virtualBasic.getEntry(b, i) * work[basic.get(b)];
+                u[i] = s;
+            }
+            cases.put(c.name(), assemble(model, eq, c, actions, particular, xs, u, row));
+        }
+        return new EngineResult(name(), true, null, cases, notes);
+    }
+
+    private static boolean isMoment(EquilibriumMatrix.Unknown u) {
+        return u.kind() == EquilibriumMatrix.Kind.MOMENT_START || u.kind() == EquilibriumMatrix.Kind.MOMENT_END
+                || (u.kind() == EquilibriumMatrix.Kind.REACTION && u.direction() == 2);
+    }
+
+    /**
+     * End forces on the member released to a simple beam (no end moments, N = 0 at the
+     * start), local {fx_i, fy_i, m_i, fx_j, fy_j, m_j}, from the member's own equilibrium.
+     */
+    static double[] released(MemberActions a) {
+        double len = a.lengthM();
+        double[] res = a.resultantAboutStart();
+        double pxAtStart = 0;
+        for (MemberActions.Point pt : a.points()) if (pt.aM() == 0) pxAtStart += pt.px();
+        double fxi = -pxAtStart;
+        double fxj = -res[0] - fxi;
+        double fyj = -res[2] / len;
+        double fyi = -res[1] - fyj;
+        return new double[]{fxi, fyi, 0, fxj, fyj, 0};
+    }
+
+    private static void addToNodes(Model model, Member mem, double[] f, double[] p, Map<String, Integer> row) {
+        double[] dir = MemberActions.direction(model, mem);
+        double cx = dir[0], cy = dir[1];
+        // the member pushes on its nodes with the opposite of the forces on its ends
+        p[row.get(mem.from() + "/0")] -= f[0] * cx - f[1] * cy;
+        p[row.get(mem.from() + "/1")] -= f[0] * cy + f[1] * cx;
+        p[row.get(mem.to() + "/0")] -= f[3] * cx - f[4] * cy;
+        p[row.get(mem.to() + "/1")] -= f[3] * cy + f[4] * cx;
+    }
+
+    private static double[] settlements(Model model, EquilibriumMatrix eq, LoadCase c) {
+        double[] d = new double[eq.unknowns().size()];
+        for (Settlement s : c.settlements()) {
+            for (int j = 0; j < d.length; j++) {
+                EquilibriumMatrix.Unknown u = eq.unknowns().get(j);
+                if (u.kind() == EquilibriumMatrix.Kind.REACTION && u.owner().equals(s.node()) && !Double.isNaN(s.value(u.direction()))) {
+                    d[j] += s.value(u.direction());
+                }
+            }
+        }
+        return d;
+    }
+
+    private static Solution assemble(Model model, EquilibriumMatrix eq, LoadCase c, Map<String, MemberActions> actions,
+                                     Map<String, double[]> particular, double[] xs, double[] u, Map<String, Integer> row) {
+        Map<String, double[]> disp = new LinkedHashMap<>();
+        for (Node nd : model.nodes().values()) {
+            Integer rz = row.get(nd.name() + "/2");
+            disp.put(nd.name(), new double[]{u[row.get(nd.name() + "/0")], u[row.get(nd.name() + "/1")], rz == null ? 0 : u[rz]});
+        }
+        Map<String, double[]> reactions = new LinkedHashMap<>();
+        for (Support s : model.supports().values()) reactions.put(s.node(), new double[3]);
+        Map<String, double[]> ends = new LinkedHashMap<>();
+        for (Member mem : model.members().values()) {
+            double[] fp = particular.get(mem.name());
+            ends.put(mem.name(), fp == null ? new double[6] : fp.clone());
+        }
+        for (int j = 0; j < xs.length; j++) {
+            EquilibriumMatrix.Unknown un = eq.unknowns().get(j);
+            if (un.kind() == EquilibriumMatrix.Kind.REACTION) {
+                Support s = model.supports().get(un.owner());
+                double cs = Math.cos(s.angleRad()), sn = Math.sin(s.angleRad());
+                double[] rr = reactions.get(un.owner());
+                if (un.direction() == 0) {
+                    rr[0] += xs[j] * cs;
+                    rr[1] += xs[j] * sn;
+                } else if (un.direction() == 1) {
+                    rr[0] -= xs[j] * sn;
+                    rr[1] += xs[j] * cs;
+                } else {
+                    rr[2] += xs[j];
+                }
+            } else {
+                Member mem = model.member(un.owner());
+                double[] unit = EquilibriumMatrix.unitEndForces(model, mem, un.kind());
+                double[] f = ends.get(mem.name());
+                for (int k = 0; k < 6; k++) f[k] += unit[k] * xs[j];
+            }
+        }
+        Map<String, MemberSolution> members = new LinkedHashMap<>();
+        for (Member mem : model.members().values()) {
+            double[] dir = MemberActions.direction(model, mem);
+            double[] ui = disp.get(mem.from()), uj = disp.get(mem.to());
+            double vi = -ui[0] * dir[1] + ui[1] * dir[0], vj = -uj[0] * dir[1] + uj[1] * dir[0];
+            MemberActions a = actions.getOrDefault(mem.name(), MemberActions.none(model.lengthM(mem)));
+            double ei = model.materialOf(mem).ePa() * model.sectionOf(mem).inertiaM4();
+            members.put(mem.name(), MemberSolution.of(ends.get(mem.name()), a, ei, vi, vj));
+        }
+        Solution s = new Solution(c.name(), disp, reactions, members, 0);
+        double res = Equilibrium.residual(model, s, Equilibrium.nodeLoads(model, Map.of(c.name(), 1.0)));
+        return new Solution(c.name(), disp, reactions, members, res);
+    }
+
+    private static double[][] negIdentity(int m) {
+        double[][] a = new double[m][m];
+        for (int i = 0; i < m; i++) a[i][i] = -1;
+        return a;
+    }
+
+    private static double norm(double[] v) {
+        return Math.sqrt(dot(v, v));
+    }
+
+    private static double dot(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) s += a[i] * b[i];
+        return s;
+    }
+
+    static String vectorText(double[] v) {
+        StringBuilder sb = new StringBuilder("[");
+        for (int i = 0; i < v.length; i++) sb.append(i == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.6g", v[i]));
+        return sb.append("]").toString();
+    }
+
+    static String matrixText(double[][] a) {
+        StringBuilder sb = new StringBuilder("[");
+        for (int i = 0; i < a.length; i++) sb.append(i == 0 ? "" : "; ").append(vectorText(a[i]));
+        return sb.append("]").toString();
+    }
+
+    /** Exact integral of f(x) g(x) over the member, g written in x from the member start. */
+    static double integrate(Piecewise f, Poly g) {
+        double s = 0;
+        for (int k = 0; k < f.segments(); k++) s += f.piece(k).times(g.shifted(f.start(k))).integrate(f.end(k) - f.start(k));
+        return s;
+    }
+
+    static MemberResponse releasedResponse(double[] fp, MemberActions a, double ei) {
+        return MemberResponse.of(new double[]{fp[0], fp[1], fp[2]}, a, ei, 0, 0);
+    }
+}
