@@ -49,7 +49,7 @@ public final class Console {
         sb.append("Plumbline ").append(ResultsTree.TOOL_VERSION).append(" independent check\n");
         if (!m.job().title().isEmpty()) sb.append(wrap("Job: " + m.job().title(), "  "));
         sb.append(wrap("Model: " + m.file() + " (" + m.nodes().size() + " nodes, " + m.members().size() + " members, "
-                + m.loadCases().size() + " load cases, " + m.combinations().size() + " combinations)", "  "));
+                + m.loadCases().size() + " load cases, " + m.combinations().size() + (m.combinations().size() == 1 ? " combination)" : " combinations)"), "  "));
         sb.append(determinacy(r.analysis().determinacy()));
         r.analysis().engines().forEach((k, v) -> {
             if (!v.stable()) sb.append(wrap(k + " method: " + v.instability(), "  "));
@@ -58,7 +58,7 @@ public final class Console {
             double worst = 0;
             String primary = r.analysis().primaryEngine();
             for (var s : r.analysis().solutions().get(primary).values()) worst = Math.max(worst, s.equilibriumResidual());
-            sb.append(String.format(Locale.ROOT, "Solved by: %s; equilibrium residual at most %.1e of the load%n", engines, worst));
+            sb.append(wrap(String.format(Locale.ROOT, "Solved by: %s; equilibrium residual at most %.1e of the load", engines, worst), "  "));
             if (agreement != null) {
                 sb.append(String.format(Locale.ROOT, "Engines agree to %.1e (largest relative difference)%n", agreement));
             }
