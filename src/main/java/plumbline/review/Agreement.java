@@ -1,6 +1,9 @@
 package plumbline.review;
 
 import java.util.Map;
+import plumbline.model.Member;
+import plumbline.model.Model;
+import plumbline.solve.Equilibrium;
 import plumbline.solve.MemberSolution;
 import plumbline.solve.Peaks;
 import plumbline.solve.Solution;
@@ -16,11 +19,28 @@ public final class Agreement {
     private Agreement() {
     }
 
-    public static double maxRelativeDifference(Map<String, Solution> a, Map<String, Solution> b) {
+    /**
+     * Values below this fraction of the model's own force and length scales (largest EA,
+     * extent) are taken as zero: a settlement of a determinate structure strains nothing,
+     * and one engine's 1e-11 N of rounding against the other's exact 0 is agreement.
+     */
+    public static final double ZERO_FRACTION = 1e-12;
+
+    public static double maxRelativeDifference(Model model, Map<String, Solution> a, Map<String, Solution> b) {
         double worst = 0;
+        double extent = Equilibrium.extent(model), ea = 0;
+        for (Member m : model.members().values()) ea = Math.max(ea, model.materialOf(m).ePa() * model.sectionOf(m).areaM2());
+        // force, moment, translation, rotation: the largest of each kind over every load set
+        double[] scale = {ZERO_FRACTION * ea, ZERO_FRACTION * ea * extent, ZERO_FRACTION * extent, ZERO_FRACTION};
+        for (Solution x : a.values()) {
+            for (double[] d : x.displacements().values()) {
+                // the same floor as the equilibrium check: rigid motion strains nothing
+                scale[0] = Math.max(scale[0], 1e-5 * ea * Math.hypot(d[0], d[1]) / extent);
+                scale[1] = Math.max(scale[1], 1e-5 * ea * Math.hypot(d[0], d[1]));
+            }
+        }
         for (var e : a.entrySet()) {
             Solution s = e.getValue(), t = b.get(e.getKey());
-            double[] scale = new double[4]; // force, moment, translation, rotation
             for (Solution x : new Solution[]{s, t}) {
                 for (double[] r : x.reactions().values()) {
                     scale[0] = Math.max(scale[0], Math.max(Math.abs(r[0]), Math.abs(r[1])));
@@ -37,6 +57,9 @@ public final class Agreement {
                     scale[2] = Math.max(scale[2], m.peaks().deflection().value());
                 }
             }
+        }
+        for (var e : a.entrySet()) {
+            Solution s = e.getValue(), t = b.get(e.getKey());
             for (var r : s.reactions().entrySet()) {
                 double[] p = r.getValue(), q = t.reactions().get(r.getKey());
                 worst = Math.max(worst, rel(p[0], q[0], scale[0]));

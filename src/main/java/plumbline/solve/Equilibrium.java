@@ -73,6 +73,13 @@ public final class Equilibrium {
             aj[2] -= f[5];
         }
         for (double v : memberResidual) worst = Math.max(worst, v);
+        // A floor for load cases that strain nothing (a settlement of a determinate structure):
+        // forces below 1e-5 of those that would strain the stiffest member by the
+        // largest displacement over the model's extent are rounding, not imbalance.
+        double ea = 0, u = 0;
+        for (Member m : model.members().values()) ea = Math.max(ea, model.materialOf(m).ePa() * model.sectionOf(m).areaM2());
+        for (double[] d : s.displacements().values()) u = Math.max(u, Math.hypot(d[0], d[1]));
+        scale = Math.max(scale, Math.max(1e-12 * ea, 1e-5 * ea * u / lc));
         for (var e : sum.entrySet()) {
             double[] a = e.getValue();
             worst = Math.max(worst, Math.max(Math.hypot(a[0], a[1]), Math.abs(a[2]) / lc));
