@@ -53,6 +53,22 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
         return Math.hypot(b.xM() - a.xM(), b.yM() - a.yM());
     }
 
+    /**
+     * The largest distance across the model's nodes, at least 1e-9 m: the length that makes
+     * moments commensurate with forces in residuals and rank tests.
+     */
+    public double extentM() {
+        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
+        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+        for (Node n : nodes.values()) {
+            minX = Math.min(minX, n.xM());
+            maxX = Math.max(maxX, n.xM());
+            minY = Math.min(minY, n.yM());
+            maxY = Math.max(maxY, n.yM());
+        }
+        return nodes.isEmpty() ? 1.0 : Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-9);
+    }
+
     public Model withClaims(List<ClaimSet> more) {
         List<ClaimSet> all = new java.util.ArrayList<>(claims);
         all.addAll(more);

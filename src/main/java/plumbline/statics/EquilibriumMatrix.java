@@ -151,14 +151,6 @@ public final class EquilibriumMatrix {
     }
 
     static double extent(Model model) {
-        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
-        for (Node n : model.nodes().values()) {
-            minX = Math.min(minX, n.xM());
-            maxX = Math.max(maxX, n.xM());
-            minY = Math.min(minY, n.yM());
-            maxY = Math.max(maxY, n.yM());
-        }
-        return Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-9);
+        return model.extentM();
     }
 }

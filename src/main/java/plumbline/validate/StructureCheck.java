@@ -129,14 +129,6 @@ public final class StructureCheck {
     }
 
     static double extent(Model m) {
-        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
-        for (Node n : m.nodes().values()) {
-            minX = Math.min(minX, n.xM());
-            maxX = Math.max(maxX, n.xM());
-            minY = Math.min(minY, n.yM());
-            maxY = Math.max(maxY, n.yM());
-        }
-        return m.nodes().isEmpty() ? 1.0 : Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-9);
+        return m.extentM();
     }
 }
