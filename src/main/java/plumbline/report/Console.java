@@ -86,7 +86,8 @@ public final class Console {
                 String unit = u.symbol(cl.dimension());
                 String line = String.format(Locale.ROOT, "%s %s %s %s %s: %s / %s %s (%s, tol %s)", flag, cl.item().word,
                         cl.name(), cl.quantity(), cl.combo(), fmt(u.fromInternal(cl.valueInternal(), cl.dimension())),
-                        fmt(u.fromInternal(c.computed(), cl.dimension())), unit, pct(c.relativeDifference()),
+                        fmt(u.fromInternal(c.computed(), cl.dimension())), unit,
+                        Math.abs(cl.valueInternal() - c.computed()) <= c.absoluteFloor() ? "below noise floor" : pct(c.relativeDifference()),
                         pct(c.tolerance().relative()));
                 sb.append(wrap(line, "         "));
                 if (c.diagnosis() != null) sb.append(wrap("         likely: " + c.diagnosis(), "         "));
