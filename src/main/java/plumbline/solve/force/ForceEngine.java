@@ -21,7 +21,6 @@ import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
 import plumbline.solve.Equilibrium;
 import plumbline.solve.MemberActions;
-import plumbline.solve.MemberResponse;
 import plumbline.solve.MemberSolution;
 import plumbline.solve.Piecewise;
 import plumbline.solve.Poly;
@@ -330,9 +329,5 @@ public final class ForceEngine implements Engine {
         double s = 0;
         for (int k = 0; k < f.segments(); k++) s += f.piece(k).times(g.shifted(f.start(k))).integrate(f.end(k) - f.start(k));
         return s;
-    }
-
-    static MemberResponse releasedResponse(double[] fp, MemberActions a, double ei) {
-        return MemberResponse.of(new double[]{fp[0], fp[1], fp[2]}, a, ei, 0, 0);
     }
 }
