@@ -43,6 +43,6 @@ final class CheckCommand implements Callable<Integer> {
             err.println("plumbline: the PDF report is not available in this version; use --json");
             return Main.INTERNAL;
         }
-        return Run.execute(model, claims, json, "both", tolerance == null ? Double.NaN : tolerance, true, out, err);
+        return Run.execute(model, claims, json, "both", tolerance == null ? Double.NaN : tolerance, out, err);
     }
 }

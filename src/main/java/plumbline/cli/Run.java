@@ -31,7 +31,7 @@ final class Run {
         return out;
     }
 
-    static int execute(Path model, List<Path> claims, Path json, String method, double tolerance, boolean printClaims,
+    static int execute(Path model, List<Path> claims, Path json, String method, double tolerance,
                        PrintWriter out, PrintWriter err) {
         Inputs in;
         try {

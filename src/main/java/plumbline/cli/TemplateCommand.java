@@ -14,6 +14,7 @@ import plumbline.model.Problem;
 import plumbline.model.Support;
 import plumbline.review.Analysis;
 import plumbline.review.LoadSet;
+import plumbline.statics.ClaimedEquilibrium;
 
 @Command(name = "template", mixinStandardHelpOptions = true,
         description = "Print a claims skeleton for the model: every reaction component and member peak per combination, to fill in.")
@@ -46,7 +47,8 @@ final class TemplateCommand implements Callable<Integer> {
             for (Support sup : m.supports().values()) {
                 StringBuilder sb = new StringBuilder("    - {node: " + q(sup.node()) + ", combo: " + q(s.name()));
                 String[] comp = {"Fx", "Fy", "Mz"};
-                for (int d = 0; d < 3; d++) if (sup.reacts(d) || (d < 2 && sup.angleRad() != 0 && sup.reacts(1 - d))) sb.append(", ").append(comp[d]).append(": ~");
+                boolean[] exerts = ClaimedEquilibrium.globalComponents(sup);
+                for (int d = 0; d < 3; d++) if (exerts[d]) sb.append(", ").append(comp[d]).append(": ~");
                 out.println(sb.append("}"));
             }
         }

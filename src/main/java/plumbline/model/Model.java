@@ -69,6 +69,21 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
         return nodes.isEmpty() ? 1.0 : Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-9);
     }
 
+    /**
+     * The nodes that carry a rotation freedom and a moment equation: those where some member
+     * end is rigid (neither hinged nor truss) or a support restrains or springs rotation. At
+     * any other node every member end turns freely, so its rotation is not a freedom.
+     */
+    public java.util.Set<String> rotationalNodes() {
+        java.util.Set<String> out = new java.util.HashSet<>();
+        for (Member m : members.values()) {
+            if (!m.releasedStart()) out.add(m.from());
+            if (!m.releasedEnd()) out.add(m.to());
+        }
+        for (Support s : supports.values()) if (s.reacts(2)) out.add(s.node());
+        return out;
+    }
+
     public Model withClaims(List<ClaimSet> more) {
         List<ClaimSet> all = new java.util.ArrayList<>(claims);
         all.addAll(more);

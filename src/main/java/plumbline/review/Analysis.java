@@ -42,9 +42,8 @@ public record Analysis(Model model, Determinacy.Result determinacy, List<LoadSet
                 for (LoadSet s : sets) {
                     Map<Solution, Double> parts = new LinkedHashMap<>();
                     for (var f : s.factors().entrySet()) parts.put(r.cases().get(f.getKey()), f.getValue());
-                    byName.put(s.name(), parts.size() == 1 && s.factors().values().iterator().next() == 1.0
-                            && s.name().equals(s.factors().keySet().iterator().next())
-                            ? r.cases().get(s.name()) : Superposition.combine(model, s.name(), parts));
+                    Solution bare = r.cases().get(s.name()); // a load case on its own needs no superposition
+                    byName.put(s.name(), bare != null ? bare : Superposition.combine(model, s.name(), parts));
                 }
                 sols.put(e.name(), byName);
             }

@@ -27,7 +27,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 TolerancePolicy.Applied tol = policy.forClaim(c, cs);
                 double floor = TolerancePolicy.ABSOLUTE_FLOOR_FRACTION * largestOfKind(a, primary, c, v.governing);
                 if (c.dimension().equals(plumbline.units.Dimension.LENGTH)) {
-                    floor = Math.max(floor, TolerancePolicy.DISPLACEMENT_NOISE_FRACTION * plumbline.solve.Equilibrium.extent(a.model()));
+                    floor = Math.max(floor, TolerancePolicy.DISPLACEMENT_NOISE_FRACTION * a.model().extentM());
                 }
                 double diff = Math.abs(c.valueInternal() - v.value);
                 double allowed = Math.max(tol.relative() * Math.abs(v.value), floor);

@@ -35,7 +35,7 @@ public final class Equilibrium {
     }
 
     public static double residual(Model model, Solution s, Map<String, double[]> nodeLoads) {
-        double lc = extent(model);
+        double lc = model.extentM();
         Map<String, double[]> sum = new HashMap<>();
         double scale = 0, worst = 0;
         for (var e : nodeLoads.entrySet()) {
@@ -88,8 +88,4 @@ public final class Equilibrium {
         return worst / scale;
     }
 
-    /** The largest distance between two nodes, at least 1e-9 m: the length that turns moments into forces. */
-    public static double extent(Model model) {
-        return model.extentM();
-    }
 }

@@ -40,7 +40,7 @@ public record ClaimedEquilibrium(String combo, String referenceNode, double sumF
         if (model.supports().isEmpty()) return out;
         Support first = model.supports().values().iterator().next();
         Node ref = model.node(first.node());
-        double lc = EquilibriumMatrix.extent(model);
+        double lc = model.extentM();
         for (var e : claimed.entrySet()) {
             Map<String, Double> factors = combos.get(e.getKey());
             if (factors == null) {
@@ -91,7 +91,7 @@ public record ClaimedEquilibrium(String combo, String referenceNode, double sumF
     }
 
     /** Which global components {Fx, Fy, Mz} a support can exert (an inclined restraint acts in both x and y). */
-    static boolean[] globalComponents(Support s) {
+    public static boolean[] globalComponents(Support s) {
         double c = Math.cos(s.angleRad()), sn = Math.sin(s.angleRad());
         boolean x = (s.reacts(0) && Math.abs(c) > 1e-12) || (s.reacts(1) && Math.abs(sn) > 1e-12);
         boolean y = (s.reacts(0) && Math.abs(sn) > 1e-12) || (s.reacts(1) && Math.abs(c) > 1e-12);

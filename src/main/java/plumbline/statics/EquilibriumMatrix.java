@@ -71,20 +71,14 @@ public final class EquilibriumMatrix {
     }
 
     public static EquilibriumMatrix of(Model model) {
-        Map<String, boolean[]> rotation = new HashMap<>();
-        for (Node n : model.nodes().values()) rotation.put(n.name(), new boolean[1]);
-        for (Member m : model.members().values()) {
-            if (!m.releasedStart()) rotation.get(m.from())[0] = true;
-            if (!m.releasedEnd()) rotation.get(m.to())[0] = true;
-        }
-        for (Support s : model.supports().values()) if (s.reacts(2)) rotation.get(s.node())[0] = true;
+        java.util.Set<String> rotation = model.rotationalNodes();
         List<Equation> eqs = new ArrayList<>();
         Map<String, Integer> row = new HashMap<>();
         for (Node n : model.nodes().values()) {
             row.put(n.name(), eqs.size());
             eqs.add(new Equation(n.name(), 0));
             eqs.add(new Equation(n.name(), 1));
-            if (rotation.get(n.name())[0]) eqs.add(new Equation(n.name(), 2));
+            if (rotation.contains(n.name())) eqs.add(new Equation(n.name(), 2));
         }
         List<Unknown> unk = new ArrayList<>();
         for (Member m : model.members().values()) {
@@ -118,7 +112,7 @@ public final class EquilibriumMatrix {
             double[] f = unitEndForces(model, m, u.kind());
             put(a, row, rotation, model, m, f, c);
         }
-        return new EquilibriumMatrix(eqs, unk, a, extent(model));
+        return new EquilibriumMatrix(eqs, unk, a, model.extentM());
     }
 
     /**
@@ -136,7 +130,7 @@ public final class EquilibriumMatrix {
     }
 
     /** Adds to column c the forces on the nodes of m from member end forces f (local). */
-    private static void put(double[][] a, Map<String, Integer> row, Map<String, boolean[]> rotation, Model model,
+    private static void put(double[][] a, Map<String, Integer> row, java.util.Set<String> rotation, Model model,
                             Member m, double[] f, int c) {
         Node ni = model.node(m.from()), nj = model.node(m.to());
         double len = model.lengthM(m);
@@ -144,13 +138,10 @@ public final class EquilibriumMatrix {
         int ri = row.get(m.from()), rj = row.get(m.to());
         a[ri][c] -= f[0] * cx - f[1] * cy;
         a[ri + 1][c] -= f[0] * cy + f[1] * cx;
-        if (rotation.get(m.from())[0]) a[ri + 2][c] -= f[2];
+        if (rotation.contains(m.from())) a[ri + 2][c] -= f[2];
         a[rj][c] -= f[3] * cx - f[4] * cy;
         a[rj + 1][c] -= f[3] * cy + f[4] * cx;
-        if (rotation.get(m.to())[0]) a[rj + 2][c] -= f[5];
+        if (rotation.contains(m.to())) a[rj + 2][c] -= f[5];
     }
 
-    static double extent(Model model) {
-        return model.extentM();
-    }
 }

@@ -36,7 +36,7 @@ public final class StructureCheck {
 
     public static List<Problem> check(Model m) {
         List<Problem> out = new ArrayList<>();
-        double extent = extent(m);
+        double extent = m.extentM();
         double tol = Math.max(extent * COINCIDENT_FRACTION, 1e-12);
         Set<String> connected = new HashSet<>();
         for (Member mem : m.members().values()) {
@@ -66,6 +66,7 @@ public final class StructureCheck {
         if (m.members().isEmpty()) {
             out.add(new Problem(plumbline.model.SourceRef.none(m.file()), "members", "no members; expected at least one"));
         }
+        java.util.Set<String> rotational = m.rotationalNodes();
         for (LoadCase c : m.loadCases()) {
             String path = "loads." + c.name();
             if (c.selfWeight()) {
@@ -104,7 +105,7 @@ public final class StructureCheck {
                 }
             }
             for (NodeLoad nl : c.nodeLoads()) {
-                if (nl.mzNm() != 0 && !hasRotationalStiffness(m, nl.node())) {
+                if (nl.mzNm() != 0 && !rotational.contains(nl.node())) {
                     out.add(new Problem(nl.at(), path + ".node_loads", "a moment Mz at node " + nl.node()
                             + ", where every member end is hinged and no support restrains rotation; nothing can resist it"));
                 }
@@ -117,18 +118,5 @@ public final class StructureCheck {
         return d.dir() == plumbline.model.LoadDirection.LOCAL_X;
     }
 
-    /** True when some member end at the node is rigid or a support restrains or springs its rotation. */
-    public static boolean hasRotationalStiffness(Model m, String node) {
-        Support s = m.supports().get(node);
-        if (s != null && s.reacts(2)) return true;
-        for (Member mem : m.members().values()) {
-            if (mem.from().equals(node) && !mem.releasedStart()) return true;
-            if (mem.to().equals(node) && !mem.releasedEnd()) return true;
-        }
-        return false;
-    }
 
-    static double extent(Model m) {
-        return m.extentM();
-    }
 }

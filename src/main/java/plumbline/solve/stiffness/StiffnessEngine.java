@@ -57,16 +57,9 @@ public final class StiffnessEngine implements Engine {
         for (int k = 0; k < nodes.size(); k++) index.put(nodes.get(k).name(), k);
         int nn = nodes.size();
         boolean[] rotation = new boolean[nn];
-        for (Member m : model.members().values()) {
-            if (!m.releasedStart()) rotation[index.get(m.from())] = true;
-            if (!m.releasedEnd()) rotation[index.get(m.to())] = true;
-        }
+        for (String r : model.rotationalNodes()) rotation[index.get(r)] = true;
         double[] frameAngle = new double[nn];
-        for (Support s : model.supports().values()) {
-            int k = index.get(s.node());
-            frameAngle[k] = s.angleRad();
-            if (s.reacts(2)) rotation[k] = true;
-        }
+        for (Support s : model.supports().values()) frameAngle[index.get(s.node())] = s.angleRad();
         List<int[]> edges = new ArrayList<>();
         for (Member m : model.members().values()) edges.add(new int[]{index.get(m.from()), index.get(m.to())});
         int[] order = NodeOrdering.reverseCuthillMcKee(nn, edges);
