@@ -24,10 +24,10 @@ final class Run {
     private Run() {
     }
 
-    static List<Engine> engines(String method) {
+    static List<Engine> engines(String method, boolean forceFits) {
         List<Engine> out = new ArrayList<>();
         if (method.equals("stiffness") || method.equals("both")) out.add(new StiffnessEngine());
-        if (method.equals("force") || method.equals("both")) out.add(new ForceEngine());
+        if (method.equals("force") || (method.equals("both") && forceFits)) out.add(new ForceEngine());
         return out;
     }
 
@@ -43,7 +43,16 @@ final class Run {
                     + "; nothing was analysed and no file was written");
             return Main.INPUT;
         }
-        Analysis a = Analysis.of(in.model, engines(method));
+        String tooLarge = ForceEngine.tooLarge(in.model);
+        if (method.equals("force") && tooLarge != null) {
+            err.println("plumbline: " + tooLarge + "; use --method stiffness (nothing was written)");
+            return Main.INTERNAL;
+        }
+        Analysis a = Analysis.of(in.model, engines(method, tooLarge == null));
+        List<String> notes = new ArrayList<>();
+        if (method.equals("both") && tooLarge != null) {
+            notes.add("force method not run: " + tooLarge + "; the results are the stiffness method's alone, unconfirmed by a second method");
+        }
         Review r = Review.of(a, new TolerancePolicy(tolerance));
         String shown = a.primaryEngine();
         Double agreement = null;
@@ -52,6 +61,7 @@ final class Run {
         }
         if (json != null) {
             Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
+            tree.put("notes", notes);
             try {
                 OutputFiles.writeAtomically(json, OutputFiles.json(tree));
             } catch (IOException e) {
@@ -61,6 +71,7 @@ final class Run {
         }
         String names = String.join(" and ", a.solutions().keySet()) + (a.solutions().size() == 1 ? " method" : " methods");
         out.print(Console.summary(r, a.solutions().isEmpty() ? "none" : names, agreement));
+        for (String n : notes) out.print(Console.wrap("Note: " + n, "  "));
         if (json != null) out.println("Results written to " + json);
         if (!a.stable()) return Main.FLAGGED;
         return r.verdict().equals("ok") ? Main.OK : Main.FLAGGED;

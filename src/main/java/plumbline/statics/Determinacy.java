@@ -57,19 +57,94 @@ public final class Determinacy {
         return of(model, EquilibriumMatrix.of(model));
     }
 
+    /**
+     * Above this many equations the rank comes from a sparse L D L^T of A A^T (in
+     * reverse Cuthill-McKee node order) instead of a dense SVD, whose cost grows as the
+     * cube of the size.
+     */
+    public static final int DENSE_LIMIT = 600;
+    /**
+     * Zero-pivot threshold of the sparse path, relative to the original diagonal of A A^T.
+     * Its pivots are squares of singular-value-like quantities, so 1e-12 here corresponds
+     * to about 1e-6 in the dense path's singular values; genuine mechanisms give pivots of
+     * rounding size (1e-16), well below.
+     */
+    public static final double SPARSE_PIVOT_TOLERANCE = 1e-12;
+
     public static Result of(Model model, EquilibriumMatrix eq) {
+        return eq.equations().size() > DENSE_LIMIT ? sparse(model, eq) : dense(model, eq);
+    }
+
+    /** The entry of A scaled so moment rows and columns are forces (entries of order one). */
+    private static double scaleFactor(EquilibriumMatrix eq, int row, int col) {
+        double lc = eq.lengthScale();
+        double rowScale = eq.equations().get(row).direction() == 2 ? 1 / lc : 1;
+        EquilibriumMatrix.Unknown u = eq.unknowns().get(col);
+        boolean momentColumn = u.kind() == EquilibriumMatrix.Kind.MOMENT_START || u.kind() == EquilibriumMatrix.Kind.MOMENT_END
+                || (u.kind() == EquilibriumMatrix.Kind.REACTION && u.direction() == 2);
+        return rowScale * (momentColumn ? lc : 1);
+    }
+
+    static Result sparse(Model model, EquilibriumMatrix eq) {
+        int m = eq.equations().size(), n = eq.unknowns().size();
+        double lc = eq.lengthScale();
+        // order the equations node by node in reverse Cuthill-McKee order of the node graph
+        List<String> nodeNames = new ArrayList<>(model.nodes().keySet());
+        java.util.Map<String, Integer> nodeIndex = new java.util.HashMap<>();
+        for (int k = 0; k < nodeNames.size(); k++) nodeIndex.put(nodeNames.get(k), k);
+        List<int[]> edges = new ArrayList<>();
+        for (Member mem : model.members().values()) edges.add(new int[]{nodeIndex.get(mem.from()), nodeIndex.get(mem.to())});
+        int[] order = plumbline.linalg.NodeOrdering.reverseCuthillMcKee(nodeNames.size(), edges);
+        int[] rank = new int[nodeNames.size()];
+        for (int k = 0; k < order.length; k++) rank[order[k]] = k;
+        Integer[] eqOrder = new Integer[m];
+        for (int i = 0; i < m; i++) eqOrder[i] = i;
+        java.util.Arrays.sort(eqOrder, (p, q) -> {
+            int a = rank[nodeIndex.get(eq.equations().get(p).node())], b = rank[nodeIndex.get(eq.equations().get(q).node())];
+            return a != b ? Integer.compare(a, b) : Integer.compare(p, q);
+        });
+        int[] pos = new int[m];
+        for (int k = 0; k < m; k++) pos[eqOrder[k]] = k;
+        int[] first = new int[m];
+        for (int i = 0; i < m; i++) first[i] = i;
+        for (int j = 0; j < n; j++) {
+            int[] r = eq.columnRows(j);
+            int min = Integer.MAX_VALUE;
+            for (int i : r) min = Math.min(min, pos[i]);
+            for (int i : r) first[pos[i]] = Math.min(first[pos[i]], min);
+        }
+        plumbline.linalg.SkylineLdl k = new plumbline.linalg.SkylineLdl(first);
+        for (int j = 0; j < n; j++) {
+            int[] r = eq.columnRows(j);
+            double[] v = eq.columnValues(j);
+            for (int p = 0; p < r.length; p++) {
+                for (int q = 0; q < r.length; q++) {
+                    if (pos[r[p]] > pos[r[q]]) continue;
+                    k.add(pos[r[p]], pos[r[q]], v[p] * scaleFactor(eq, r[p], j) * v[q] * scaleFactor(eq, r[q], j));
+                }
+            }
+        }
+        int[] zeros = k.factorSemidefinite(SPARSE_PIVOT_TOLERANCE);
+        List<Mechanism> shapes = new ArrayList<>();
+        for (int z : zeros) {
+            double[] x = k.nullVector(z);
+            double[] vec = new double[m];
+            for (int i = 0; i < m; i++) vec[i] = x[pos[i]];
+            shapes.add(describe(model, eq, vec, lc));
+        }
+        int r = m - zeros.length;
+        return classify(m, n, r, shapes, 1.0, false);
+    }
+
+    static Result dense(Model model, EquilibriumMatrix eq) {
         int m = eq.equations().size(), n = eq.unknowns().size();
         double lc = eq.lengthScale();
         int size = Math.max(m, n);
         double[][] s = new double[m][size];
-        for (int i = 0; i < m; i++) {
-            double rowScale = eq.equations().get(i).direction() == 2 ? 1 / lc : 1;
-            for (int j = 0; j < n; j++) {
-                EquilibriumMatrix.Kind k = eq.unknowns().get(j).kind();
-                boolean momentColumn = k == EquilibriumMatrix.Kind.MOMENT_START || k == EquilibriumMatrix.Kind.MOMENT_END
-                        || (k == EquilibriumMatrix.Kind.REACTION && eq.unknowns().get(j).direction() == 2);
-                s[i][j] = eq.get(i, j) * rowScale * (momentColumn ? lc : 1);
-            }
+        for (int j = 0; j < n; j++) {
+            int[] r = eq.columnRows(j);
+            double[] v = eq.columnValues(j);
+            for (int p = 0; p < r.length; p++) s[r[p]][j] = v[p] * scaleFactor(eq, r[p], j);
         }
         int rank;
         List<Mechanism> shapes = new ArrayList<>();
@@ -90,6 +165,10 @@ public final class Determinacy {
                 shapes.add(describe(model, eq, vec, lc));
             }
         }
+        return classify(m, n, rank, shapes, condition, true);
+    }
+
+    private static Result classify(int m, int n, int rank, List<Mechanism> shapes, double condition, boolean conditionKnown) {
         int degree = n - rank, mech = m - rank;
         Classification c = mech > 0 ? Classification.UNSTABLE : degree == 0 ? Classification.DETERMINATE
                 : Classification.INDETERMINATE;
@@ -100,7 +179,7 @@ public final class Determinacy {
             remark = "the count of unknowns less equations gives " + counting + " (" + (counting == 0 ? "determinate"
                     : "indeterminate") + "), but the equations are not independent: the arrangement is geometrically "
                     + "unstable (parallel or concurrent reactions, or a collinear linkage)";
-        } else if (mech == 0 && condition < NEAR_MECHANISM) {
+        } else if (mech == 0 && conditionKnown && condition < NEAR_MECHANISM) {
             remark = String.format(Locale.ROOT, "near-mechanism: the equilibrium equations are nearly dependent "
                     + "(smallest to largest singular value %.1e); check for nearly collinear or nearly parallel members or reactions", condition);
         }

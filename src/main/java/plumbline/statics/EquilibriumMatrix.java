@@ -36,13 +36,16 @@ public final class EquilibriumMatrix {
 
     private final List<Equation> equations;
     private final List<Unknown> unknowns;
-    private final double[][] a;
+    /** Column storage: a column has at most six non-zeros (a member's two nodes), a reaction one or two. */
+    private final int[][] rows;
+    private final double[][] values;
     private final double lengthScale;
 
-    private EquilibriumMatrix(List<Equation> eqs, List<Unknown> unk, double[][] a, double lengthScale) {
+    private EquilibriumMatrix(List<Equation> eqs, List<Unknown> unk, int[][] rows, double[][] values, double lengthScale) {
         this.equations = List.copyOf(eqs);
         this.unknowns = List.copyOf(unk);
-        this.a = a;
+        this.rows = rows;
+        this.values = values;
         this.lengthScale = lengthScale;
     }
 
@@ -56,7 +59,19 @@ public final class EquilibriumMatrix {
 
     /** Entry (row, column) in SI (N per N, or N per N*m, or N*m per N). */
     public double get(int row, int col) {
-        return a[row][col];
+        int[] r = rows[col];
+        for (int k = 0; k < r.length; k++) if (r[k] == row) return values[col][k];
+        return 0.0;
+    }
+
+    /** Row indices of the non-zeros of column {@code col}. */
+    public int[] columnRows(int col) {
+        return rows[col].clone();
+    }
+
+    /** Values of the non-zeros of column {@code col}, in the order of {@link #columnRows(int)}. */
+    public double[] columnValues(int col) {
+        return values[col].clone();
     }
 
     /** The characteristic length (m) used to make moment rows and columns commensurate with forces. */
@@ -64,9 +79,10 @@ public final class EquilibriumMatrix {
         return lengthScale;
     }
 
-    public double[][] copy() {
-        double[][] c = new double[a.length][];
-        for (int i = 0; i < a.length; i++) c[i] = a[i].clone();
+    /** The whole matrix, dense (for small models only). */
+    public double[][] dense() {
+        double[][] c = new double[equations.size()][unknowns.size()];
+        for (int j = 0; j < rows.length; j++) for (int k = 0; k < rows[j].length; k++) c[rows[j][k]][j] += values[j][k];
         return c;
     }
 
@@ -90,29 +106,33 @@ public final class EquilibriumMatrix {
         for (Support s : model.supports().values()) {
             for (int d = 0; d < 3; d++) if (s.reacts(d)) unk.add(new Unknown(Kind.REACTION, s.node(), d, s.node() + "." + dirs[d]));
         }
-        double[][] a = new double[eqs.size()][unk.size()];
+        int[][] rowsOf = new int[unk.size()][];
+        double[][] valuesOf = new double[unk.size()][];
         for (int c = 0; c < unk.size(); c++) {
             Unknown u = unk.get(c);
+            java.util.TreeMap<Integer, Double> a = new java.util.TreeMap<>();
             if (u.kind() == Kind.REACTION) {
                 Support s = model.supports().get(u.owner());
                 int r = row.get(u.owner());
                 double cs = Math.cos(s.angleRad()), sn = Math.sin(s.angleRad());
                 if (u.direction() == 0) {
-                    a[r][c] = cs;
-                    a[r + 1][c] = sn;
+                    a.merge(r, cs, Double::sum);
+                    a.merge(r + 1, sn, Double::sum);
                 } else if (u.direction() == 1) {
-                    a[r][c] = -sn;
-                    a[r + 1][c] = cs;
+                    a.merge(r, -sn, Double::sum);
+                    a.merge(r + 1, cs, Double::sum);
                 } else {
-                    a[r + 2][c] = 1;
+                    a.merge(r + 2, 1.0, Double::sum);
                 }
-                continue;
+            } else {
+                Member m = model.member(u.owner());
+                put(a, row, rotation, model, m, unitEndForces(model, m, u.kind()));
             }
-            Member m = model.member(u.owner());
-            double[] f = unitEndForces(model, m, u.kind());
-            put(a, row, rotation, model, m, f, c);
+            a.values().removeIf(v -> v == 0.0);
+            rowsOf[c] = a.keySet().stream().mapToInt(Integer::intValue).toArray();
+            valuesOf[c] = a.values().stream().mapToDouble(Double::doubleValue).toArray();
         }
-        return new EquilibriumMatrix(eqs, unk, a, model.extentM());
+        return new EquilibriumMatrix(eqs, unk, rowsOf, valuesOf, model.extentM());
     }
 
     /**
@@ -129,19 +149,19 @@ public final class EquilibriumMatrix {
         };
     }
 
-    /** Adds to column c the forces on the nodes of m from member end forces f (local). */
-    private static void put(double[][] a, Map<String, Integer> row, java.util.Set<String> rotation, Model model,
-                            Member m, double[] f, int c) {
+    /** Adds to a column the forces on the nodes of m from member end forces f (local). */
+    private static void put(java.util.Map<Integer, Double> a, Map<String, Integer> row, java.util.Set<String> rotation,
+                            Model model, Member m, double[] f) {
         Node ni = model.node(m.from()), nj = model.node(m.to());
         double len = model.lengthM(m);
         double cx = (nj.xM() - ni.xM()) / len, cy = (nj.yM() - ni.yM()) / len;
         int ri = row.get(m.from()), rj = row.get(m.to());
-        a[ri][c] -= f[0] * cx - f[1] * cy;
-        a[ri + 1][c] -= f[0] * cy + f[1] * cx;
-        if (rotation.contains(m.from())) a[ri + 2][c] -= f[2];
-        a[rj][c] -= f[3] * cx - f[4] * cy;
-        a[rj + 1][c] -= f[3] * cy + f[4] * cx;
-        if (rotation.contains(m.to())) a[rj + 2][c] -= f[5];
+        a.merge(ri, -(f[0] * cx - f[1] * cy), Double::sum);
+        a.merge(ri + 1, -(f[0] * cy + f[1] * cx), Double::sum);
+        if (rotation.contains(m.from())) a.merge(ri + 2, -f[2], Double::sum);
+        a.merge(rj, -(f[3] * cx - f[4] * cy), Double::sum);
+        a.merge(rj + 1, -(f[3] * cy + f[4] * cx), Double::sum);
+        if (rotation.contains(m.to())) a.merge(rj + 2, -f[5], Double::sum);
     }
 
 }

@@ -49,6 +49,22 @@ public final class ForceEngine implements Engine {
     /** Columns whose residual norm after projection falls below this fraction of their own norm add no rank. */
     static final double INDEPENDENCE_TOLERANCE = 1e-9;
 
+    /**
+     * The force engine works on dense matrices (Gram-Schmidt choice of the primary
+     * structure, LU of the primary equilibrium matrix): cost grows as the cube of the
+     * number of node equations. Above this many it is not run.
+     */
+    public static final int MAX_EQUATIONS = 1200;
+
+    /** Why the model is too large for this engine, or null when it is not. */
+    public static String tooLarge(Model model) {
+        int m = 0;
+        java.util.Set<String> rot = model.rotationalNodes();
+        for (String n : model.nodes().keySet()) m += rot.contains(n) ? 3 : 2;
+        return m > MAX_EQUATIONS ? "the model has " + m + " node equations; the dense force method takes at most "
+                + MAX_EQUATIONS : null;
+    }
+
     @Override
     public String name() {
         return "force";

@@ -5,6 +5,8 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import plumbline.linalg.NodeOrdering;
+import plumbline.linalg.SkylineLdl;
 import plumbline.model.LoadCase;
 import plumbline.model.Member;
 import plumbline.model.Model;

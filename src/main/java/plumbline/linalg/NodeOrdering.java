@@ -1,4 +1,4 @@
-package plumbline.solve.stiffness;
+package plumbline.linalg;
 
 import java.util.ArrayDeque;
 import java.util.ArrayList;
@@ -11,13 +11,13 @@ import java.util.List;
  * reversal after A. George, 1971): breadth-first from a low-degree node, neighbours by
  * increasing degree, the whole order reversed. Keeps the skyline of K narrow.
  */
-final class NodeOrdering {
+public final class NodeOrdering {
 
     private NodeOrdering() {
     }
 
     /** @return order[k] = the node placed k-th */
-    static int[] reverseCuthillMcKee(int nodes, List<int[]> edges) {
+    public static int[] reverseCuthillMcKee(int nodes, List<int[]> edges) {
         List<List<Integer>> adj = new ArrayList<>();
         for (int i = 0; i < nodes; i++) adj.add(new ArrayList<>());
         for (int[] e : edges) {

@@ -1,18 +1,20 @@
-package plumbline.solve.stiffness;
+package plumbline.linalg;
 
 /**
  * A symmetric matrix in skyline (variable band) storage and its L D L^T factorization,
- * column by column (the active-column scheme). Factored once; every load case is then
- * another right-hand side.
+ * column by column (the active-column scheme of K.J. Bathe, Finite Element Procedures,
+ * 1996, section 8.2.3). Factored once; every right-hand side is then a forward and a
+ * back substitution. General numerics with no structural knowledge: the stiffness engine
+ * factors K with it, statics factors A A^T with it for large models.
  */
-final class SkylineLdl {
+public final class SkylineLdl {
 
     /**
      * A pivot below this fraction of its original diagonal means the stiffness matrix is
      * singular to working precision: the structure has a mechanism at that freedom.
      * 1e-11 leaves about five digits above double rounding for stiffness ratios of 1e6.
      */
-    static final double PIVOT_TOLERANCE = 1e-11;
+    public static final double PIVOT_TOLERANCE = 1e-11;
 
     private final int n;
     private final int[] first;   // first row stored in column j
@@ -20,7 +22,7 @@ final class SkylineLdl {
     private final double[] a;
     private int singularAt = -1;
 
-    SkylineLdl(int[] firstRow) {
+    public SkylineLdl(int[] firstRow) {
         n = firstRow.length;
         first = firstRow.clone();
         start = new int[n + 1];
@@ -28,16 +30,16 @@ final class SkylineLdl {
         a = new double[start[n]];
     }
 
-    int size() {
+    public int size() {
         return n;
     }
 
-    long storedEntries() {
+    public long storedEntries() {
         return start[n];
     }
 
     /** Adds v to entry (i, j); only the upper triangle within the skyline is stored. */
-    void add(int i, int j, double v) {
+    public void add(int i, int j, double v) {
         if (i > j) {
             int t = i;
             i = j;
@@ -47,12 +49,8 @@ final class SkylineLdl {
         a[start[j] + i - first[j]] += v;
     }
 
-    private double get(int i, int j) {
-        return i < first[j] ? 0 : a[start[j] + i - first[j]];
-    }
-
     /** Factors in place; returns false (and remembers where) if a pivot vanishes. */
-    boolean factor() {
+    public boolean factor() {
         for (int j = 0; j < n; j++) {
             int mj = first[j], sj = start[j];
             double original = a[sj + j - mj];
@@ -79,12 +77,62 @@ final class SkylineLdl {
         return true;
     }
 
-    int singularAt() {
+    /**
+     * Factors a positive semi-definite matrix, treating every pivot below
+     * {@code relativeTolerance} of its original diagonal as zero (its row of the Schur
+     * complement is then zero to rounding, so it is dropped). Returns the indices of the
+     * zero pivots; their number is the nullity.
+     */
+    public int[] factorSemidefinite(double relativeTolerance) {
+        java.util.List<Integer> zeros = new java.util.ArrayList<>();
+        for (int j = 0; j < n; j++) {
+            int mj = first[j], sj = start[j];
+            double original = a[sj + j - mj];
+            for (int i = mj + 1; i < j; i++) {
+                int mi = first[i], si = start[i];
+                int m = Math.max(mi, mj);
+                double s = 0;
+                for (int r = m; r < i; r++) s += a[si + r - mi] * a[sj + r - mj];
+                a[sj + i - mj] -= s;
+            }
+            double d = original;
+            for (int i = mj; i < j; i++) {
+                double g = a[sj + i - mj];
+                double l = g / a[start[i] + i - first[i]];
+                a[sj + i - mj] = l;
+                d -= g * l;
+            }
+            if (!(d > relativeTolerance * Math.abs(original))) {
+                zeros.add(j);
+                d = Double.POSITIVE_INFINITY; // later columns take nothing from this row
+            }
+            a[sj + j - mj] = d;
+        }
+        zeroPivots = zeros.stream().mapToInt(Integer::intValue).toArray();
+        return zeroPivots.clone();
+    }
+
+    private int[] zeroPivots = new int[0];
+
+    /** A null vector for zero pivot {@code j} after {@link #factorSemidefinite}: L^T x = e_j. */
+    public double[] nullVector(int j) {
+        double[] x = new double[n];
+        x[j] = 1;
+        for (int k = j; k >= 0; k--) {
+            double xk = x[k];
+            if (xk == 0) continue;
+            int mk = first[k], sk = start[k];
+            for (int r = mk; r < k; r++) x[r] -= a[sk + r - mk] * xk;
+        }
+        return x;
+    }
+
+    public int singularAt() {
         return singularAt;
     }
 
     /** Solves (L D L^T) x = b after {@link #factor()}; b is not changed. */
-    double[] solve(double[] b) {
+    public double[] solve(double[] b) {
         double[] x = b.clone();
         for (int j = 0; j < n; j++) {
             int mj = first[j], sj = start[j];
