@@ -46,7 +46,7 @@ final class Inputs {
         m = m.withClaims(sets);
         List<String> names = new ArrayList<>();
         for (LoadSet s : Analysis.loadSets(m)) names.add(s.name());
-        problems.addAll(ClaimCheck.check(m, names, !m.combinations().isEmpty()));
+        problems.addAll(ClaimCheck.check(m, names, Analysis.loadSets(m).stream().anyMatch(LoadSet::combination)));
         if (!problems.isEmpty()) throw new InputException(problems);
         List<Path> files = new ArrayList<>();
         files.add(modelFile);

@@ -120,7 +120,14 @@ public final class ModelReader {
         List<Combination> combos = combinations(top.get("combinations"), cases);
         List<String> standards = new ArrayList<>();
         for (Tree t : top.list("standard_combinations", false, "a list of standard combination sets")) {
-            if (t instanceof Tree.Scalar s) standards.add(s.text());
+            if (t instanceof Tree.Scalar s && Combination.STANDARD_SETS.contains(s.text())) {
+                if (standards.contains(s.text())) problems.add(new Problem(t.at(), "standard_combinations", "'" + s.text() + "' listed twice"));
+                else standards.add(s.text());
+            } else if (t instanceof Tree.Scalar s) {
+                String hint = Fields.closest(s.text(), Combination.STANDARD_SETS);
+                problems.add(new Problem(t.at(), "standard_combinations", "unknown set '" + s.text() + "'"
+                        + (hint != null ? "; did you mean '" + hint + "'?" : "; expected one of " + String.join(", ", Combination.STANDARD_SETS))));
+            }
             else problems.add(new Problem(t.at(), "standard_combinations", "found " + t.describe() + "; expected a name"));
         }
         List<String> redundants = redundants(top.get("force_method"));

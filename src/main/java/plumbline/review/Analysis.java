@@ -23,8 +23,9 @@ public record Analysis(Model model, Determinacy.Result determinacy, List<LoadSet
 
     public static List<LoadSet> loadSets(Model model) {
         List<LoadSet> out = new ArrayList<>();
-        for (LoadCase c : model.loadCases()) out.add(new LoadSet(c.name(), Map.of(c.name(), 1.0), "load case " + c.type()));
-        for (Combination c : model.combinations()) out.add(new LoadSet(c.name(), c.factors(), c.origin()));
+        for (LoadCase c : model.loadCases()) out.add(new LoadSet(c.name(), Map.of(c.name(), 1.0), "load case " + c.type(), false));
+        for (Combination c : model.combinations()) out.add(new LoadSet(c.name(), c.factors(), c.origin(), true));
+        out.addAll(StandardCombinations.expand(model));
         return out;
     }
 

@@ -7,7 +7,7 @@ import java.util.Map;
  * own (factor 1), a user combination, or one generated from a standard; {@code origin}
  * says which, for the report.
  */
-public record LoadSet(String name, Map<String, Double> factors, String origin) {
+public record LoadSet(String name, Map<String, Double> factors, String origin, boolean combination) {
     public LoadSet {
         factors = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(factors));
     }

@@ -59,7 +59,8 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         if (!c.combo().equals("envelope")) return new Value(of(sols.get(c.combo()), c), c.combo());
         double best = Double.NaN;
         String gov = null;
-        for (var s : a.model().combinations()) {
+        for (LoadSet s : a.loadSets()) {
+            if (!s.combination()) continue;
             double v = of(sols.get(s.name()), c);
             boolean better;
             if (Double.isNaN(best)) better = true;
