@@ -57,7 +57,8 @@ final class Run {
         String shown = a.primaryEngine();
         Double agreement = null;
         if (a.solutions().containsKey("stiffness") && a.solutions().containsKey("force")) {
-            agreement = plumbline.review.Agreement.maxRelativeDifference(in.model, a.solutions().get("stiffness"), a.solutions().get("force"));
+            agreement = plumbline.review.Agreement.maxRelativeDifference(in.model, a.engines().get("stiffness").cases(),
+                    a.engines().get("force").cases());
         }
         if (json != null) {
             Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);

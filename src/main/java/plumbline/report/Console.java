@@ -87,7 +87,8 @@ public final class Console {
                 String line = String.format(Locale.ROOT, "%s %s %s %s %s: %s / %s %s (%s, tol %s)", flag, cl.item().word,
                         cl.name(), cl.quantity(), cl.combo(), fmt(u.fromInternal(cl.valueInternal(), cl.dimension())),
                         fmt(u.fromInternal(c.computed(), cl.dimension())), unit,
-                        Math.abs(cl.valueInternal() - c.computed()) <= c.absoluteFloor() ? "below noise floor" : pct(c.relativeDifference()),
+                        c.status() == ClaimResult.Status.OK && c.relativeDifference() > c.tolerance().relative()
+                                ? "under the absolute floor" : pct(c.relativeDifference()),
                         pct(c.tolerance().relative()));
                 sb.append(wrap(line, "         "));
                 if (c.diagnosis() != null) sb.append(wrap("         likely: " + c.diagnosis(), "         "));

@@ -9,8 +9,8 @@ import plumbline.model.Model;
 import plumbline.review.Analysis;
 import plumbline.review.ClaimResult;
 import plumbline.review.LoadSet;
+import plumbline.review.LoadSetResult;
 import plumbline.review.Review;
-import plumbline.solve.MemberSolution;
 import plumbline.solve.Solution;
 import plumbline.statics.ClaimedEquilibrium;
 import plumbline.statics.Determinacy;
@@ -43,7 +43,7 @@ public final class ResultsTree {
         root.put("units", map("force", u.force().symbol(), "length", u.length().symbol()));
         root.put("determinacy", determinacy(a.determinacy()));
         Map<String, Object> combos = new LinkedHashMap<>();
-        Map<String, Solution> sols = engineShown == null ? null : a.solutions().get(engineShown);
+        Map<String, LoadSetResult> sols = engineShown == null ? null : a.solutions().get(engineShown);
         if (sols != null) {
             for (LoadSet s : a.loadSets()) combos.put(s.name(), solution(m, s, sols.get(s.name())));
         }
@@ -84,35 +84,65 @@ public final class ResultsTree {
         return o;
     }
 
-    static Map<String, Object> solution(Model m, LoadSet set, Solution s) {
+    /**
+     * One load set. For a pattern-loaded set the reactions and displacements listed are the
+     * envelope value of larger magnitude, with both bounds under "envelope", and each member
+     * peak names the members loaded to produce it.
+     */
+    static Map<String, Object> solution(Model m, LoadSet set, LoadSetResult r) {
         UnitSystem u = m.units();
+        Solution rep = r.representative();
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("factors", new LinkedHashMap<>(set.factors()));
         o.put("origin", set.origin());
-        Map<String, Object> r = new LinkedHashMap<>();
-        s.reactions().forEach((k, v) -> r.put(k, map("Fx", out(u, v[0], Dimension.FORCE), "Fy", out(u, v[1], Dimension.FORCE),
-                "Mz", out(u, v[2], Dimension.MOMENT))));
-        o.put("reactions", r);
+        o.put("pattern_envelope", r.patterned());
+        Map<String, Object> reac = new LinkedHashMap<>(), reacRange = new LinkedHashMap<>();
+        Dimension[] rd = {Dimension.FORCE, Dimension.FORCE, Dimension.MOMENT};
+        String[] rn = {"Fx", "Fy", "Mz"};
+        for (String node : rep.reactions().keySet()) {
+            Map<String, Object> one = new LinkedHashMap<>(), range = new LinkedHashMap<>();
+            for (int c = 0; c < 3; c++) {
+                double hi = r.reaction(node, c, true), lo = r.reaction(node, c, false);
+                one.put(rn[c], out(u, Math.abs(lo) > Math.abs(hi) ? lo : hi, rd[c]));
+                range.put(rn[c], map("min", out(u, lo, rd[c]), "max", out(u, hi, rd[c])));
+            }
+            reac.put(node, one);
+            reacRange.put(node, range);
+        }
+        o.put("reactions", reac);
         Map<String, Object> mem = new LinkedHashMap<>();
-        for (var e : s.members().entrySet()) {
-            MemberSolution ms = e.getValue();
+        for (String name : rep.members().keySet()) {
             Map<String, Object> p = new LinkedHashMap<>();
             Map<String, Object> at = new LinkedHashMap<>();
+            Map<String, Object> loaded = new LinkedHashMap<>();
             for (String q : PEAKS) {
-                Claim.Kind k = Claim.Kind.MEMBER;
-                Dimension d = plumbline.io.ClaimsReader.dimensionOf(k, q);
-                p.put(q, out(u, ms.peaks().value(q), d));
-                at.put(q, out(u, ms.peaks().position(q), Dimension.LENGTH));
+                Dimension d = plumbline.io.ClaimsReader.dimensionOf(Claim.Kind.MEMBER, q);
+                LoadSetResult.Peak pk = r.peak(name, q);
+                p.put(q, out(u, pk.value(), d));
+                at.put(q, out(u, pk.xM(), Dimension.LENGTH));
+                if (r.patterned()) loaded.put(q, pk.loadedMembers());
             }
             p.put("at", at);
-            mem.put(e.getKey(), p);
+            if (r.patterned()) p.put("loaded_members", loaded);
+            mem.put(name, p);
         }
         o.put("members", mem);
-        Map<String, Object> d = new LinkedHashMap<>();
-        s.displacements().forEach((k, v) -> d.put(k, map("ux", out(u, v[0], Dimension.LENGTH), "uy", out(u, v[1], Dimension.LENGTH),
-                "rz", num(v[2]))));
-        o.put("displacements", d);
-        o.put("equilibrium", map("residual", num(s.equilibriumResidual())));
+        Map<String, Object> disp = new LinkedHashMap<>(), dispRange = new LinkedHashMap<>();
+        Dimension[] dd = {Dimension.LENGTH, Dimension.LENGTH, Dimension.NONE};
+        String[] dn = {"ux", "uy", "rz"};
+        for (String node : rep.displacements().keySet()) {
+            Map<String, Object> one = new LinkedHashMap<>(), range = new LinkedHashMap<>();
+            for (int c = 0; c < 3; c++) {
+                double hi = r.displacement(node, c, true), lo = r.displacement(node, c, false);
+                one.put(dn[c], out(u, Math.abs(lo) > Math.abs(hi) ? lo : hi, dd[c]));
+                range.put(dn[c], map("min", out(u, lo, dd[c]), "max", out(u, hi, dd[c])));
+            }
+            disp.put(node, one);
+            dispRange.put(node, range);
+        }
+        o.put("displacements", disp);
+        if (r.patterned()) o.put("envelope", map("reactions", reacRange, "displacements", dispRange));
+        o.put("equilibrium", map("residual", num(r.equilibriumResidual())));
         return o;
     }
 

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import plumbline.model.Combination;
 import plumbline.model.LoadCase;
+import plumbline.model.MemberLoad;
 import plumbline.model.Model;
 import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
@@ -16,10 +17,16 @@ import plumbline.statics.Determinacy;
 /**
  * The model solved: statics first (a model that statics finds unstable is not handed to an
  * engine), then each requested engine, every load set formed by superposition of the
- * engine's load-case solutions.
+ * engine's load-case solutions. A pattern-loaded case is handed to the engines split into
+ * its fixed part (node loads, temperatures, settlements) and one case per member carrying
+ * its member loads, so every arrangement is a superposition (the matrix is still factored
+ * once).
  */
-public record Analysis(Model model, Determinacy.Result determinacy, List<LoadSet> loadSets,
-                       Map<String, EngineResult> engines, Map<String, Map<String, Solution>> solutions) {
+public record Analysis(Model model, Model engineModel, Determinacy.Result determinacy, List<LoadSet> loadSets,
+                       Map<String, EngineResult> engines, Map<String, Map<String, LoadSetResult>> solutions) {
+
+    /** Separates a pattern case's name from the member whose loads a sub-case holds. */
+    static final String PART = "\u27e8";
 
     public static List<LoadSet> loadSets(Model model) {
         List<LoadSet> out = new ArrayList<>();
@@ -29,27 +36,72 @@ public record Analysis(Model model, Determinacy.Result determinacy, List<LoadSet
         return out;
     }
 
+    /** The model the engines solve: each pattern case split into its fixed part and one case per loaded member. */
+    static Model engineModel(Model model) {
+        if (model.loadCases().stream().noneMatch(LoadCase::pattern)) return model;
+        List<LoadCase> cases = new ArrayList<>();
+        for (LoadCase c : model.loadCases()) {
+            if (!c.pattern()) {
+                cases.add(c);
+                continue;
+            }
+            cases.add(new LoadCase(c.name(), c.type(), c.selfWeight(), false, List.of(), c.nodeLoads(), c.temperatures(),
+                    c.settlements(), c.at()));
+            Map<String, List<MemberLoad>> byMember = new LinkedHashMap<>();
+            for (MemberLoad l : c.memberLoads()) byMember.computeIfAbsent(l.member(), k -> new ArrayList<>()).add(l);
+            for (var e : byMember.entrySet()) {
+                cases.add(new LoadCase(c.name() + PART + e.getKey(), c.type(), false, false, e.getValue(), List.of(), List.of(),
+                        List.of(), c.at()));
+            }
+        }
+        return new Model(model.file(), model.job(), model.units(), model.materials(), model.sections(), model.nodes(),
+                model.supports(), model.members(), cases, List.of(), List.of(), model.redundants(), List.of());
+    }
+
     public static Analysis of(Model model, List<Engine> engines) {
         Determinacy.Result det = Determinacy.of(model);
         List<LoadSet> sets = loadSets(model);
+        Model em = engineModel(model);
         Map<String, EngineResult> results = new LinkedHashMap<>();
-        Map<String, Map<String, Solution>> sols = new LinkedHashMap<>();
+        Map<String, Map<String, LoadSetResult>> sols = new LinkedHashMap<>();
         if (det.classification() != Determinacy.Classification.UNSTABLE) {
             for (Engine e : engines) {
-                EngineResult r = e.solve(model);
+                EngineResult r = e.solve(em);
                 results.put(e.name(), r);
                 if (!r.stable()) continue;
-                Map<String, Solution> byName = new LinkedHashMap<>();
-                for (LoadSet s : sets) {
-                    Map<Solution, Double> parts = new LinkedHashMap<>();
-                    for (var f : s.factors().entrySet()) parts.put(r.cases().get(f.getKey()), f.getValue());
-                    Solution bare = r.cases().get(s.name()); // a load case on its own needs no superposition
-                    byName.put(s.name(), bare != null ? bare : Superposition.combine(model, s.name(), parts));
-                }
+                Map<String, LoadSetResult> byName = new LinkedHashMap<>();
+                for (LoadSet s : sets) byName.put(s.name(), result(model, em, r, s));
                 sols.put(e.name(), byName);
             }
         }
-        return new Analysis(model, det, sets, results, sols);
+        return new Analysis(model, em, det, sets, results, sols);
+    }
+
+    private static LoadSetResult result(Model model, Model em, EngineResult r, LoadSet s) {
+        boolean patterned = s.factors().keySet().stream().anyMatch(c -> model.loadCase(c).pattern());
+        if (!patterned) {
+            Solution bare = r.cases().get(s.name()); // a load case on its own needs no superposition
+            if (bare != null && !s.combination()) return new LoadSetResult.Plain(bare);
+            Map<Solution, Double> parts = new LinkedHashMap<>();
+            for (var f : s.factors().entrySet()) parts.put(r.cases().get(f.getKey()), f.getValue());
+            return new LoadSetResult.Plain(Superposition.combine(em, s.name(), parts));
+        }
+        Map<Solution, Double> fixed = new LinkedHashMap<>(), all = new LinkedHashMap<>();
+        List<LoadSetResult.Part> parts = new ArrayList<>();
+        for (var f : s.factors().entrySet()) {
+            fixed.put(r.cases().get(f.getKey()), f.getValue());
+            all.put(r.cases().get(f.getKey()), f.getValue());
+            if (!model.loadCase(f.getKey()).pattern()) continue;
+            for (var c : r.cases().entrySet()) {
+                if (!c.getKey().startsWith(f.getKey() + PART)) continue;
+                String member = c.getKey().substring(f.getKey().length() + PART.length());
+                parts.add(new LoadSetResult.Part(member, Superposition.combine(em, s.name() + PART + member,
+                        Map.of(c.getValue(), f.getValue()))));
+                all.put(c.getValue(), f.getValue());
+            }
+        }
+        return new LoadSetResult.Pattern(s.name(), Superposition.combine(em, s.name(), fixed), parts,
+                Superposition.combine(em, s.name(), all));
     }
 
     public boolean stable() {

@@ -35,7 +35,8 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                         : diff <= TolerancePolicy.MARGINAL_FACTOR * allowed ? ClaimResult.Status.MARGINAL
                         : ClaimResult.Status.MISMATCH;
                 double rel = v.value == 0 ? (diff == 0 ? 0 : Double.POSITIVE_INFINITY) : diff / Math.abs(v.value);
-                out.add(new ClaimResult(c, cs.file(), v.value, force, rel, tol, floor, st, v.governing, null));
+                String gov = v.governing + (v.loaded.isEmpty() ? "" : " with loads on " + String.join(", ", v.loaded));
+                out.add(new ClaimResult(c, cs.file(), v.value, force, rel, tol, floor, st, gov, null));
             }
         }
         Map<String, Map<String, Double>> factors = new java.util.LinkedHashMap<>();
@@ -50,57 +51,63 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         return new Review(a, out, eq, verdict);
     }
 
-    record Value(double value, String governing) {
+    /** A computed value, the load set that governs it, and the members loaded for it (pattern loading). */
+    record Value(double value, String governing, java.util.List<String> loaded) {
     }
 
-    /** The computed value of the claimed quantity (SI); for envelope, the most severe over the combinations. */
+    static final String[] REACTIONS = {"Fx", "Fy", "Mz"};
+    static final String[] DISPLACEMENTS = {"ux", "uy", "rz"};
+
+    /**
+     * The computed value of the claimed quantity (SI). Under pattern loading a reaction or
+     * displacement has an upper and a lower value: a claim of zero or more is compared with
+     * the upper, a negative claim with the lower. For {@code envelope}, the most severe
+     * value over the combinations.
+     */
     static Value value(Analysis a, String engine, Claim c) {
-        Map<String, Solution> sols = a.solutions().get(engine);
-        if (!c.combo().equals("envelope")) return new Value(of(sols.get(c.combo()), c), c.combo());
-        double best = Double.NaN;
-        String gov = null;
+        Map<String, LoadSetResult> sols = a.solutions().get(engine);
+        if (!c.combo().equals("envelope")) return of(sols.get(c.combo()), c);
+        Value best = null;
         for (LoadSet s : a.loadSets()) {
             if (!s.combination()) continue;
-            double v = of(sols.get(s.name()), c);
+            Value v = of(sols.get(s.name()), c);
             boolean better;
-            if (Double.isNaN(best)) better = true;
-            else if (c.quantity().endsWith("_max")) better = v > best;
-            else if (c.quantity().endsWith("_min")) better = v < best;
-            else better = Math.abs(v) > Math.abs(best);
-            if (better) {
-                best = v;
-                gov = s.name();
-            }
+            if (best == null) better = true;
+            else if (c.quantity().endsWith("_max")) better = v.value > best.value;
+            else if (c.quantity().endsWith("_min")) better = v.value < best.value;
+            else if (c.item() != Claim.Kind.MEMBER) better = c.valueInternal() >= 0 ? v.value > best.value : v.value < best.value;
+            else better = Math.abs(v.value) > Math.abs(best.value);
+            if (better) best = v;
         }
-        return new Value(best, gov);
+        return best;
     }
 
-    static double of(Solution s, Claim c) {
-        String[] comps = {"Fx", "Fy", "Mz"};
-        String[] disp = {"ux", "uy", "rz"};
+    static Value of(LoadSetResult s, Claim c) {
+        boolean upper = c.valueInternal() >= 0;
         switch (c.item()) {
-            case REACTION: {
-                double[] r = s.reactions().get(c.name());
-                return r == null ? 0.0 : r[java.util.Arrays.asList(comps).indexOf(c.quantity())];
-            }
+            case REACTION:
+                return new Value(s.reaction(c.name(), java.util.Arrays.asList(REACTIONS).indexOf(c.quantity()), upper), s.name(),
+                        java.util.List.of());
             case DISPLACEMENT:
-                return s.displacements().get(c.name())[java.util.Arrays.asList(disp).indexOf(c.quantity())];
+                return new Value(s.displacement(c.name(), java.util.Arrays.asList(DISPLACEMENTS).indexOf(c.quantity()), upper),
+                        s.name(), java.util.List.of());
             default: {
-                MemberSolution m = s.members().get(c.name());
-                return m.peaks().value(c.quantity());
+                LoadSetResult.Peak p = s.peak(c.name(), c.quantity());
+                return new Value(p.value(), s.name(), p.loadedMembers());
             }
         }
     }
 
     /** The largest magnitude of the same kind of quantity (reaction force, moment, ...) in the load set. */
     static double largestOfKind(Analysis a, String engine, Claim c, String set) {
-        Solution s = a.solutions().get(engine).get(set);
-        if (s == null) return 0;
+        LoadSetResult r = a.solutions().get(engine).get(set);
+        if (r == null) return 0;
+        Solution s = r.representative();
         double max = 0;
         switch (c.item()) {
             case REACTION:
-                for (double[] r : s.reactions().values()) {
-                    max = c.quantity().equals("Mz") ? Math.max(max, Math.abs(r[2])) : Math.max(max, Math.hypot(r[0], r[1]));
+                for (double[] x : s.reactions().values()) {
+                    max = c.quantity().equals("Mz") ? Math.max(max, Math.abs(x[2])) : Math.max(max, Math.hypot(x[0], x[1]));
                 }
                 return max;
             case DISPLACEMENT:

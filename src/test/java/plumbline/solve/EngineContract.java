@@ -49,7 +49,7 @@ abstract class EngineContract {
             assertEquals(ClaimResult.Status.OK, c.status(), file + ": " + c.claim().id() + " claimed "
                     + c.claim().valueInternal() + " computed " + c.computed());
         }
-        for (Solution s : r.analysis().solutions().get(engine().name()).values()) {
+        for (plumbline.review.LoadSetResult s : r.analysis().solutions().get(engine().name()).values()) {
             assertTrue(s.equilibriumResidual() < RESIDUAL, s.name() + " residual " + s.equilibriumResidual());
         }
     }

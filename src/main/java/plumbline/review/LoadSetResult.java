@@ -1,0 +1,157 @@
+package plumbline.review;
+
+import java.util.ArrayList;
+import java.util.List;
+import plumbline.solve.Envelope;
+import plumbline.solve.MemberResponse;
+import plumbline.solve.MemberSolution;
+import plumbline.solve.Piecewise;
+import plumbline.solve.Solution;
+
+/**
+ * The computed results of one load set, in SI: a single solved state, or, when the set
+ * holds a pattern-loaded case, the exact envelope over every on/off arrangement of that
+ * case's member loads (member by member), formed by superposition of per-member
+ * solutions. A reaction or displacement then has an upper and a lower value; a member
+ * peak is the envelope's, with the members loaded to produce it.
+ */
+public sealed interface LoadSetResult {
+
+    String name();
+
+    /** True when the values are an envelope over pattern arrangements. */
+    boolean patterned();
+
+    /** Reaction component (0 Fx, 1 Fy, 2 Mz); for an envelope its upper or lower value. */
+    double reaction(String node, int component, boolean upper);
+
+    double displacement(String node, int component, boolean upper);
+
+    Peak peak(String member, String quantity);
+
+    double equilibriumResidual();
+
+    /** The state drawn and listed for the set: the solution itself, or every patterned load on. */
+    Solution representative();
+
+    /** A member peak, where it occurs, and (for an envelope) the members whose loads are on. */
+    record Peak(double value, double xM, List<String> loadedMembers) {
+    }
+
+    record Plain(Solution solution) implements LoadSetResult {
+        public String name() {
+            return solution.name();
+        }
+
+        public boolean patterned() {
+            return false;
+        }
+
+        public double reaction(String node, int component, boolean upper) {
+            double[] r = solution.reactions().get(node);
+            return r == null ? 0.0 : r[component];
+        }
+
+        public double displacement(String node, int component, boolean upper) {
+            return solution.displacements().get(node)[component];
+        }
+
+        public Peak peak(String member, String quantity) {
+            MemberSolution m = solution.members().get(member);
+            return new Peak(m.peaks().value(quantity), m.peaks().position(quantity), List.of());
+        }
+
+        public double equilibriumResidual() {
+            return solution.equilibriumResidual();
+        }
+
+        public Solution representative() {
+            return solution;
+        }
+    }
+
+    /** One arrangement unit: the loads on one member of a pattern case, factored. */
+    record Part(String loadedMember, Solution solution) {
+    }
+
+    record Pattern(String name, Solution fixed, List<Part> parts, Solution allOn) implements LoadSetResult {
+        public Pattern {
+            parts = List.copyOf(parts);
+        }
+
+        public boolean patterned() {
+            return true;
+        }
+
+        public double reaction(String node, int c, boolean upper) {
+            double v = value(fixed.reactions().get(node), c);
+            for (Part p : parts) {
+                double q = value(p.solution().reactions().get(node), c);
+                v += upper ? Math.max(0, q) : Math.min(0, q);
+            }
+            return v;
+        }
+
+        public double displacement(String node, int c, boolean upper) {
+            double v = fixed.displacements().get(node)[c];
+            for (Part p : parts) {
+                double q = p.solution().displacements().get(node)[c];
+                v += upper ? Math.max(0, q) : Math.min(0, q);
+            }
+            return v;
+        }
+
+        private static double value(double[] r, int c) {
+            return r == null ? 0.0 : r[c];
+        }
+
+        public Peak peak(String member, String quantity) {
+            if (quantity.equals("deflection")) {
+                Envelope.Extreme hi = Envelope.max(fixed.members().get(member).response().deflection(), functions(member, "v"));
+                Envelope.Extreme lo = Envelope.min(fixed.members().get(member).response().deflection(), functions(member, "v"));
+                return Math.abs(lo.value()) > Math.abs(hi.value()) ? peak(new Envelope.Extreme(-lo.value(), lo.xM(), lo.partsOn()))
+                        : peak(hi);
+            }
+            String f = quantity.substring(0, 1);
+            Piecewise base = function(fixed.members().get(member).response(), f);
+            List<Piecewise> ps = functions(member, f);
+            Envelope.Extreme hi = Envelope.max(base, ps), lo = Envelope.min(base, ps);
+            if (quantity.endsWith("_max")) return peak(hi);
+            if (quantity.endsWith("_min")) return peak(lo);
+            return Math.abs(lo.value()) > Math.abs(hi.value())
+                    ? peak(new Envelope.Extreme(Math.abs(lo.value()), lo.xM(), lo.partsOn()))
+                    : peak(new Envelope.Extreme(Math.abs(hi.value()), hi.xM(), hi.partsOn()));
+        }
+
+        private Peak peak(Envelope.Extreme e) {
+            List<String> on = new ArrayList<>();
+            for (int k : e.partsOn()) on.add(parts.get(k).loadedMember());
+            return new Peak(e.value(), e.xM(), on);
+        }
+
+        private List<Piecewise> functions(String member, String f) {
+            List<Piecewise> out = new ArrayList<>();
+            for (Part p : parts) out.add(function(p.solution().members().get(member).response(), f));
+            return out;
+        }
+
+        private static Piecewise function(MemberResponse r, String f) {
+            return switch (f) {
+                case "N" -> r.axial();
+                case "V" -> r.shear();
+                case "M" -> r.moment();
+                default -> r.deflection();
+            };
+        }
+
+        public double equilibriumResidual() {
+            double w = fixed.equilibriumResidual();
+            for (Part p : parts) w = Math.max(w, p.solution().equilibriumResidual());
+            return Math.max(w, allOn.equilibriumResidual());
+        }
+
+        public Solution representative() {
+            return allOn;
+        }
+    }
+}
