@@ -53,7 +53,7 @@ final class Run {
         if (method.equals("both") && tooLarge != null) {
             notes.add("force method not run: " + tooLarge + "; the results are the stiffness method's alone, unconfirmed by a second method");
         }
-        Review r = Review.of(a, new TolerancePolicy(tolerance));
+        Review r = Review.of(a, new TolerancePolicy(tolerance), new StiffnessEngine());
         String shown = a.primaryEngine();
         Double agreement = null;
         if (a.solutions().containsKey("stiffness") && a.solutions().containsKey("force")) {

@@ -17,7 +17,16 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                      String verdict) {
 
     public static Review of(Analysis a, TolerancePolicy policy) {
+        return of(a, policy, null);
+    }
+
+    /**
+     * @param variantEngine the engine that solves variant models when diagnosing a
+     *                      discrepancy (null: no variants are tried)
+     */
+    public static Review of(Analysis a, TolerancePolicy policy, plumbline.solve.Engine variantEngine) {
         List<ClaimResult> out = new ArrayList<>();
+        Map<String, Map<String, LoadSetResult>> variantCache = new java.util.HashMap<>();
         String primary = a.primaryEngine();
         for (ClaimSet cs : a.model().claims()) {
             for (Claim c : cs.claims()) {
@@ -36,7 +45,9 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                         : ClaimResult.Status.MISMATCH;
                 double rel = v.value == 0 ? (diff == 0 ? 0 : Double.POSITIVE_INFINITY) : diff / Math.abs(v.value);
                 String gov = v.governing + (v.loaded.isEmpty() ? "" : " with loads on " + String.join(", ", v.loaded));
-                out.add(new ClaimResult(c, cs.file(), v.value, force, rel, tol, floor, st, gov, null));
+                String diagnosis = st == ClaimResult.Status.OK ? null
+                        : Diagnosis.explain(a, primary, c, v.value, tol.relative(), variantEngine, variantCache);
+                out.add(new ClaimResult(c, cs.file(), v.value, force, rel, tol, floor, st, gov, diagnosis));
             }
         }
         Map<String, Map<String, Double>> factors = new java.util.LinkedHashMap<>();

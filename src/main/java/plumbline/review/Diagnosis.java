@@ -1,0 +1,221 @@
+package plumbline.review;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.function.Function;
+import plumbline.model.Claim;
+import plumbline.model.LoadCase;
+import plumbline.model.MemberLoad;
+import plumbline.model.Model;
+import plumbline.model.Support;
+import plumbline.solve.Engine;
+import plumbline.units.Dimension;
+import plumbline.units.Units;
+
+/**
+ * Tries the slips that most often explain a wrong number in a calculation package and keeps
+ * those that reproduce the claimed value within the claim's own tolerance, closest first:
+ * a unit slip, a sign reversal, swapped components, the value of another support or member,
+ * another combination or a single load case, unfactored loads, and variants of the model
+ * solved again (self-weight omitted, pattern loading omitted, a load per sloped length
+ * instead of per plan, a support pinned instead of fixed or the reverse).
+ */
+final class Diagnosis {
+
+    /** Variant models are solved again only up to this size (each is a full solve). */
+    static final int VARIANT_MEMBER_LIMIT = 2000;
+
+    private record Hypothesis(double candidate, String sentence) {
+    }
+
+    /** A unit a number may really have been in: its label and its value in SI. */
+    private record Slip(String label, double toSi) {
+    }
+
+    private static final double LBF = Units.LBF_IN_N, FT = Units.FOOT_IN_M, IN = Units.INCH_IN_M, G = 9.80665;
+
+    private static List<Slip> slips(Dimension d) {
+        if (d.equals(Dimension.FORCE)) {
+            return List.of(new Slip("N", 1), new Slip("kN", 1e3), new Slip("MN", 1e6), new Slip("lbf", LBF),
+                    new Slip("kip", 1e3 * LBF), new Slip("tonne (mass taken as force, 9.81 kN)", 1e3 * G),
+                    new Slip("kg (mass taken as force)", G));
+        }
+        if (d.equals(Dimension.MOMENT)) {
+            return List.of(new Slip("N*m", 1), new Slip("kN*m", 1e3), new Slip("kip*ft", 1e3 * LBF * FT),
+                    new Slip("kip*in", 1e3 * LBF * IN), new Slip("lbf*ft", LBF * FT), new Slip("lbf*in", LBF * IN),
+                    new Slip("kN*mm", 1.0), new Slip("tonne*m (mass taken as force)", 1e3 * G));
+        }
+        if (d.equals(Dimension.LENGTH)) {
+            return List.of(new Slip("mm", 1e-3), new Slip("cm", 1e-2), new Slip("m", 1), new Slip("in", IN), new Slip("ft", FT));
+        }
+        if (d.equals(Dimension.ANGLE)) return List.of(new Slip("rad", 1), new Slip("deg", Math.PI / 180));
+        return List.of();
+    }
+
+    private Diagnosis() {
+    }
+
+    static String explain(Analysis a, String engine, Claim c, double computed, double tolerance, Engine variantEngine,
+                          Map<String, Map<String, LoadSetResult>> variantCache) {
+        List<Hypothesis> hs = new ArrayList<>();
+        Model m = a.model();
+        String what = describe(c);
+        String unitShown = m.units().symbol(c.dimension());
+        double shownComputed = m.units().fromInternal(computed, c.dimension());
+        // a unit slip: the claimed number is the computed value expressed in another unit
+        if (Double.isFinite(c.writtenValue())) {
+            for (Slip s : slips(c.dimension())) {
+                double inSlip = computed / s.toSi;
+                if (s.label.startsWith(c.writtenUnit() + " ") || s.label.equals(c.writtenUnit())) continue;
+                hs.add(new Hypothesis(inSlip * factorOfWritten(c), String.format(Locale.ROOT,
+                        "claimed %s = %s %s equals the computed %s %s expressed in %s (%s): likely unit slip", what,
+                        fmt(c.writtenValue()), c.writtenUnit(), fmt(shownComputed), unitShown, s.label, fmt(inSlip))));
+            }
+        }
+        hs.add(new Hypothesis(-computed, String.format(Locale.ROOT,
+                "claimed %s has the opposite sign of the computed %s %s: a sign slip or another sign convention "
+                        + "(reactions here are forces on the structure; M is positive sagging)", what, fmt(shownComputed), unitShown)));
+        LoadSetResult here = a.solutions().get(engine).get(c.combo());
+        // swapped components or quantities
+        List<String> others = c.item() == Claim.Kind.REACTION ? List.of("Fx", "Fy", "Mz")
+                : c.item() == Claim.Kind.DISPLACEMENT ? List.of("ux", "uy", "rz")
+                : List.of("N_max", "N_min", "V_max", "V_min", "M_max", "M_min", "deflection");
+        if (here != null) {
+            for (String q : others) {
+                if (q.equals(c.quantity())) continue;
+                Claim alt = with(c, c.name(), q, c.combo());
+                if (!plumbline.io.ClaimsReader.dimensionOf(c.item(), q).equals(c.dimension())) continue;
+                double v = Review.of(here, alt).value();
+                hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s matches the computed %s of the same %s (%s %s): "
+                        + "components or quantities swapped", what, q, c.item() == Claim.Kind.MEMBER ? "member" : "node",
+                        fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
+            }
+            // another support or member
+            List<String> names = c.item() == Claim.Kind.REACTION ? new ArrayList<>(m.supports().keySet())
+                    : c.item() == Claim.Kind.DISPLACEMENT ? new ArrayList<>(m.nodes().keySet()) : new ArrayList<>(m.members().keySet());
+            for (String n : names) {
+                if (n.equals(c.name())) continue;
+                double v = Review.of(here, with(c, n, c.quantity(), c.combo())).value();
+                hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s is the computed value at %s %s (%s %s): "
+                        + "read from the wrong line", what, c.item() == Claim.Kind.MEMBER ? "member" : "node", n,
+                        fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
+            }
+        }
+        // another combination or a load case on its own
+        for (LoadSet s : a.loadSets()) {
+            if (s.name().equals(c.combo())) continue;
+            double v = Review.of(a.solutions().get(engine).get(s.name()), with(c, c.name(), c.quantity(), s.name())).value();
+            hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the computed value under %s %s (%s %s): "
+                    + "another combination was used", what, s.combination() ? "combination" : "load case", s.name(),
+                    fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
+        }
+        Map<String, Double> factors = a.factors(c.combo());
+        if (factors != null && factors.values().stream().anyMatch(f -> f != 1.0)) {
+            // unfactored: the combination's cases at factor 1 (service level, as in allowable stress design)
+            double v = 0;
+            for (String cs : factors.keySet()) {
+                v += Review.of(a.solutions().get(engine).get(cs), with(c, c.name(), c.quantity(), cs)).value();
+            }
+            if (c.item() != Claim.Kind.MEMBER) {
+                hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with the loads of %s "
+                        + "unfactored (%s %s): load factors left out, or service-level (ASD) loads against a strength "
+                        + "combination", what, c.combo(), fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
+            }
+        }
+        if (here != null && here.patterned()) {
+            double v = Review.of(new LoadSetResult.Plain(here.representative()), c).value();
+            hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with every span loaded (%s %s): "
+                    + "pattern loading omitted", what, fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
+        }
+        if (variantEngine != null && m.members().size() <= VARIANT_MEMBER_LIMIT) variants(a, c, variantEngine, variantCache, hs, what, unitShown);
+        // keep those within tolerance of the claim, closest first
+        double claimed = c.valueInternal();
+        List<Hypothesis> good = new ArrayList<>();
+        for (Hypothesis h : hs) {
+            if (!Double.isFinite(h.candidate)) continue;
+            double scale = Math.max(Math.abs(h.candidate), Math.abs(claimed));
+            if (scale == 0) continue;
+            if (Math.abs(claimed - h.candidate) <= tolerance * Math.abs(h.candidate) && Math.abs(h.candidate - computed) > tolerance * Math.abs(computed)) {
+                good.add(h);
+            }
+        }
+        good.sort(Comparator.comparingDouble(h -> Math.abs(claimed - h.candidate) / Math.max(Math.abs(h.candidate), 1e-300)));
+        if (good.isEmpty()) return null;
+        List<String> out = new ArrayList<>();
+        for (Hypothesis h : good) if (!out.contains(h.sentence)) out.add(h.sentence);
+        return String.join("; or ", out.subList(0, Math.min(3, out.size())));
+    }
+
+    /** SI per unit of the written number, so a slip candidate in the written number becomes SI. */
+    private static double factorOfWritten(Claim c) {
+        return c.writtenValue() == 0 ? 1 : c.valueInternal() / c.writtenValue();
+    }
+
+    private static void variants(Analysis a, Claim c, Engine engine, Map<String, Map<String, LoadSetResult>> cache,
+                                 List<Hypothesis> hs, String what, String unitShown) {
+        Model m = a.model();
+        Map<String, Function<Model, Model>> tries = new LinkedHashMap<>();
+        if (m.loadCases().stream().anyMatch(LoadCase::selfWeight)) {
+            tries.put("self-weight omitted", x -> withCases(x, lc -> new LoadCase(lc.name(), lc.type(), false, lc.pattern(),
+                    lc.memberLoads(), lc.nodeLoads(), lc.temperatures(), lc.settlements(), lc.at())));
+        }
+        boolean plan = m.loadCases().stream().flatMap(lc -> lc.memberLoads().stream())
+                .anyMatch(l -> l instanceof MemberLoad.Distributed d && d.perPlan());
+        if (plan) {
+            tries.put("the load taken per sloped length instead of per plan (the 1/cos factor)", x -> withCases(x, lc -> new LoadCase(lc.name(),
+                    lc.type(), lc.selfWeight(), lc.pattern(), lc.memberLoads().stream().map(l -> l instanceof MemberLoad.Distributed d && d.perPlan()
+                    ? new MemberLoad.Distributed(d.member(), d.dir(), false, d.fromM(), d.toM(), d.w1NPerM(), d.w2NPerM(), d.at()) : l).toList(),
+                    lc.nodeLoads(), lc.temperatures(), lc.settlements(), lc.at())));
+        }
+        for (Support s : m.supports().values()) {
+            boolean fixed = s.fixUx() && s.fixUy() && s.fixRz(), pinned = s.fixUx() && s.fixUy() && !s.fixRz();
+            if (!fixed && !pinned) continue;
+            tries.put("support " + s.node() + " taken as " + (fixed ? "pinned instead of fixed" : "fixed instead of pinned"), x -> {
+                Map<String, Support> sup = new LinkedHashMap<>(x.supports());
+                sup.put(s.node(), new Support(s.node(), true, true, pinned, s.angleRad(), s.springUxNPerM(), s.springUyNPerM(),
+                        s.springRzNmPerRad(), s.at()));
+                return new Model(x.file(), x.job(), x.units(), x.materials(), x.sections(), x.nodes(), sup, x.members(),
+                        x.loadCases(), x.combinations(), x.standardCombinations(), x.redundants(), List.of());
+            });
+        }
+        for (var t : tries.entrySet()) {
+            Map<String, LoadSetResult> sols = cache.computeIfAbsent(t.getKey(), k -> {
+                Model v = t.getValue().apply(m);
+                Analysis va = Analysis.of(v, List.of(engine));
+                return va.stable() ? va.solutions().get(engine.name()) : Map.of();
+            });
+            LoadSetResult r = sols.get(c.combo());
+            if (r == null) continue;
+            if (c.combo().equals("envelope")) continue;
+            double v = Review.of(r, c).value();
+            hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with %s (%s %s)", what, t.getKey(),
+                    fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
+        }
+    }
+
+    private static Model withCases(Model x, Function<LoadCase, LoadCase> f) {
+        return new Model(x.file(), x.job(), x.units(), x.materials(), x.sections(), x.nodes(), x.supports(), x.members(),
+                x.loadCases().stream().map(f).toList(), x.combinations(), x.standardCombinations(), x.redundants(), List.of());
+    }
+
+    private static Claim with(Claim c, String name, String quantity, String combo) {
+        return new Claim(c.item(), name, combo, quantity, c.valueInternal(), c.dimension(), c.writtenValue(), c.writtenUnit(),
+                c.toleranceOverride(), c.at());
+    }
+
+    static String describe(Claim c) {
+        String where = c.item() == Claim.Kind.MEMBER ? "of " + c.name() : "at " + c.name();
+        return c.quantity() + " " + where + " (" + c.combo() + ")";
+    }
+
+    static String fmt(double v) {
+        double a = Math.abs(v);
+        if (a == 0) return "0";
+        if (a >= 1e-3 && a < 1e7) return String.format(Locale.ROOT, "%." + Math.max(0, 3 - (int) Math.floor(Math.log10(a))) + "f", v);
+        return String.format(Locale.ROOT, "%.3e", v);
+    }
+}
