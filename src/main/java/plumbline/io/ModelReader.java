@@ -100,6 +100,11 @@ public final class ModelReader {
     }
 
     private Model model(Tree root) {
+        if (root instanceof Tree.MapNode mn && mn.entries().containsKey("claims") && !mn.entries().containsKey("format")) {
+            problems.add(new Problem(mn.at(), "(document)", "this is a claims file, not a model; expected a model "
+                    + "with 'format: plumbline/1' (give claims files with --claims)"));
+            return null;
+        }
         Fields top = Fields.of(root, "", problems, TOP_KEYS, "a map with 'format: plumbline/1'");
         if (top == null) return null;
         String format = top.text("format", true, "'" + FORMAT_MAJOR + "'");

@@ -98,6 +98,17 @@ public final class Console {
             long mm = r.claims().stream().filter(c -> c.status() == ClaimResult.Status.MISMATCH).count();
             sb.append(String.format(Locale.ROOT, "Claims: %d ok, %d marginal, %d mismatch%n", ok, mg, mm));
         }
+        if (!r.warnings().isEmpty()) {
+            sb.append("Plausibility warnings:\n");
+            int k = 0;
+            for (var w : r.warnings()) {
+                if (k++ == 8) {
+                    sb.append("  (" + (r.warnings().size() - 8) + " more in the JSON and the report)\n");
+                    break;
+                }
+                sb.append(wrap("  " + w.subject() + ": " + w.message(), "    "));
+            }
+        }
         sb.append("Verdict: ").append(r.verdict().toUpperCase(Locale.ROOT)).append('\n');
         sb.append(wrap("Caution: an independent check of a simplified linear-elastic model; it does not replace the "
                 + "engineer of record, licensed review or local codes.", "  "));

@@ -59,6 +59,9 @@ public final class ResultsTree {
         List<Object> eq = new ArrayList<>();
         for (ClaimedEquilibrium e : review.equilibrium()) eq.add(equilibrium(u, e));
         root.put("claimed_equilibrium", eq);
+        List<Object> warn = new ArrayList<>();
+        for (var w : review.warnings()) warn.add(map("subject", w.subject(), "message", w.message(), "rule", w.rule()));
+        root.put("warnings", warn);
         root.put("verdict", review.verdict());
         return root;
     }

@@ -8,13 +8,17 @@ import plumbline.model.ClaimSet;
 import plumbline.solve.MemberSolution;
 import plumbline.solve.Solution;
 import plumbline.statics.ClaimedEquilibrium;
+import plumbline.validate.Plausibility;
 
 /**
  * Compares every claim with the computed value and gives the verdict: the worst status, or
  * unstable. Envelope claims take the most severe value over all combinations.
  */
 public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEquilibrium> equilibrium,
-                     String verdict) {
+                     List<Plausibility.Warning> warnings, String verdict) {
+
+    /** A deflection beyond span/50 under any load set is a slip or a mechanism-like model (common practice). */
+    public static final double SPAN_OVER_DEFLECTION_MIN = 50;
 
     public static Review of(Analysis a, TolerancePolicy policy) {
         return of(a, policy, null);
@@ -59,7 +63,22 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         else if (out.stream().anyMatch(r -> r.status() == ClaimResult.Status.MARGINAL)) verdict = "marginal";
         else verdict = "ok";
         if (verdict.equals("ok") && eq.stream().anyMatch(e -> !e.balanced())) verdict = "marginal";
-        return new Review(a, out, eq, verdict);
+        List<Plausibility.Warning> warnings = new ArrayList<>(Plausibility.check(a.model()));
+        if (primary != null) {
+            for (LoadSet set : a.loadSets()) {
+                LoadSetResult r = a.solutions().get(primary).get(set.name());
+                for (String mem : a.model().members().keySet()) {
+                    double span = a.model().lengthM(a.model().member(mem));
+                    double d = r.peak(mem, "deflection").value();
+                    if (d > span / SPAN_OVER_DEFLECTION_MIN) {
+                        warnings.add(new Plausibility.Warning("deflections beyond span/50 are not credible for a linear model "
+                                + "(common practice)", "member " + mem + ", " + set.name(),
+                                String.format(java.util.Locale.ROOT, "deflection = span/%.3g", span / d)));
+                    }
+                }
+            }
+        }
+        return new Review(a, out, eq, warnings, verdict);
     }
 
     /** A computed value, the load set that governs it, and the members loaded for it (pattern loading). */
