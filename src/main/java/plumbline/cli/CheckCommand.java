@@ -39,10 +39,6 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
-        if (pdf != null) {
-            err.println("plumbline: the PDF report is not available in this version; use --json");
-            return Main.INTERNAL;
-        }
-        return Run.execute(model, claims, json, "both", tolerance == null ? Double.NaN : tolerance, out, err);
+        return Run.execute(model, claims, json, pdf, "both", tolerance == null ? Double.NaN : tolerance, out, err);
     }
 }

@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "plumbline", mixinStandardHelpOptions = true, version = "plumbline 1.0.0",
         description = "Independent check of plane frame, beam and truss models and of the results claimed for them.",
-        subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, UnitsCommand.class,
+        subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, UnitsCommand.class, SchemaCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 
@@ -47,6 +47,7 @@ public final class Main implements Runnable {
     }
 
     public static void main(String[] args) {
+        System.setProperty("java.awt.headless", "true");
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
         System.exit(run(args, out, err));

@@ -31,12 +31,13 @@ final class Run {
         return out;
     }
 
-    static int execute(Path model, List<Path> claims, Path json, String method, double tolerance,
+    static int execute(Path model, List<Path> claims, Path json, Path pdf, String method, double tolerance,
                        PrintWriter out, PrintWriter err) {
         Inputs in;
         try {
             in = Inputs.load(model, claims);
             if (json != null) OutputFiles.refuseInputs(json, in.files, "--json");
+            if (pdf != null) OutputFiles.refuseInputs(pdf, in.files, "--pdf");
         } catch (InputException e) {
             for (Problem p : e.problems()) err.println(p);
             err.println("plumbline: " + e.problems().size() + " input problem" + (e.problems().size() == 1 ? "" : "s")
@@ -60,6 +61,12 @@ final class Run {
             agreement = plumbline.review.Agreement.maxRelativeDifference(in.model, a.engines().get("stiffness").cases(),
                     a.engines().get("force").cases());
         }
+        byte[] report = null;
+        if (pdf != null) {
+            // rendered in full before anything is written, so a failure leaves no file behind
+            report = plumbline.report.PdfReport.render(r, new ResultsTree.Inputs(in.names(), in.sha256()), agreement, notes,
+                    java.time.LocalDate.now());
+        }
         if (json != null) {
             Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
             tree.put("notes", notes);
@@ -71,9 +78,18 @@ final class Run {
             }
         }
         String names = String.join(" and ", a.solutions().keySet()) + (a.solutions().size() == 1 ? " method" : " methods");
+        if (report != null) {
+            try {
+                OutputFiles.writeAtomically(pdf, report);
+            } catch (IOException e) {
+                err.println(pdf + ": cannot write the report: " + e.getMessage());
+                return Main.INTERNAL;
+            }
+        }
         out.print(Console.summary(r, a.solutions().isEmpty() ? "none" : names, agreement));
         for (String n : notes) out.print(Console.wrap("Note: " + n, "  "));
         if (json != null) out.println("Results written to " + json);
+        if (pdf != null) out.println("Report written to " + pdf);
         if (!a.stable()) return Main.FLAGGED;
         return r.verdict().equals("ok") ? Main.OK : Main.FLAGGED;
     }

@@ -1,0 +1,83 @@
+package plumbline.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.lowagie.text.pdf.PdfReader;
+import com.lowagie.text.pdf.parser.PdfTextExtractor;
+import com.networknt.schema.JsonSchema;
+import com.networknt.schema.JsonSchemaFactory;
+import com.networknt.schema.SpecVersion;
+import com.networknt.schema.ValidationMessage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Set;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import plumbline.report.Console;
+
+/**
+ * The outputs of check read back as a checker would: the JSON validates against the shipped
+ * schema, and the PDF's text holds every section, page x of y on every page, the input
+ * hashes, the cautions and, for every claim, the same claimed and computed numbers and
+ * status as the JSON, with flagged rows marked.
+ */
+class ReportTest {
+
+    static final ObjectMapper JSON = new ObjectMapper();
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({
+            "footbridge-truss.yaml, footbridge-truss-claims.yaml",
+            "three-span-beam.yaml, three-span-beam-claims.csv",
+            "portal-frame.yaml, portal-frame-claims.yaml",
+            "../checks/20-two-span-pattern-live.yaml, ",
+    })
+    void pdfAndJsonAgree(String model, String claims) throws Exception {
+        Path dir = Files.createTempDirectory("plumbline");
+        Path json = dir.resolve("r.json"), pdf = dir.resolve("r.pdf");
+        CliRunner r = claims == null
+                ? CliRunner.run("check", "samples/" + model, "--json", json.toString(), "--pdf", pdf.toString())
+                : CliRunner.run("check", "samples/" + model, "--claims", "samples/" + claims, "--json", json.toString(), "--pdf", pdf.toString());
+        assertTrue(r.code() == 0 || r.code() == 1, r.err());
+        JsonNode tree = JSON.readTree(json.toFile());
+        JsonSchema schema = JsonSchemaFactory.getInstance(SpecVersion.VersionFlag.V202012).getSchema(SchemaCommand.text());
+        Set<ValidationMessage> errors = schema.validate(tree);
+        assertTrue(errors.isEmpty(), errors.toString());
+
+        PdfReader reader = new PdfReader(Files.readAllBytes(pdf));
+        int pages = reader.getNumberOfPages();
+        PdfTextExtractor ex = new PdfTextExtractor(reader);
+        StringBuilder all = new StringBuilder();
+        for (int p = 1; p <= pages; p++) {
+            String text = ex.getTextFromPage(p);
+            assertTrue(text.contains("page " + p + " of " + pages), "footer on page " + p);
+            all.append(text).append('\n');
+        }
+        String text = all.toString().replaceAll("\\s+", " ");
+        for (String section : new String[]{"1 Summary", "2 The model as checked", "3 Determinacy, stability and equilibrium",
+                "4 Claims compared", "5 Queries for the originator", "7 Force-method working", "8 Plausibility warnings",
+                "9 Assumptions and cautions", "10 Sign-off"}) {
+            assertTrue(text.contains(section), "section " + section);
+        }
+        assertTrue(text.contains("does not replace the engineer of record"), "caution");
+        assertTrue(text.contains("Verdict: " + tree.get("verdict").asText().toUpperCase()), "verdict");
+        for (JsonNode h : tree.get("input").get("sha256")) assertTrue(text.contains(h.asText()), "hash " + h);
+        assertTrue(text.contains(tree.get("determinacy").get("classification").asText()));
+        String unitForce = tree.get("units").get("force").asText();
+        for (JsonNode c : tree.get("claims")) {
+            String claimed = Console.fmt(c.get("claimed").asDouble()), computed = Console.fmt(c.get("computed").asDouble());
+            assertTrue(text.contains(claimed), "claimed " + claimed + " of " + c.get("id"));
+            assertTrue(text.contains(computed), "computed " + computed + " of " + c.get("id"));
+            assertTrue(text.contains(c.get("status").asText().toUpperCase()), "status of " + c.get("id"));
+        }
+        boolean anyMismatch = false;
+        for (JsonNode c : tree.get("claims")) anyMismatch |= c.get("status").asText().equals("mismatch");
+        assertEquals(anyMismatch, java.util.regex.Pattern.compile("!! (reaction|member|displacement) ").matcher(text).find(),
+                "flag marks follow the statuses");
+        assertFalse(unitForce.isEmpty());
+    }
+}
