@@ -78,6 +78,10 @@ public final class Console {
             }
             sb.append(wrap(line, "    "));
         }
+        int given = m.claims().stream().mapToInt(cs -> cs.claims().size()).sum();
+        if (!r.analysis().stable() && given > 0) {
+            sb.append(wrap("Claims: none of the " + given + " claims can be compared while the model is unstable", "  "));
+        }
         if (!r.claims().isEmpty()) {
             sb.append("Claims (claimed / computed, model units):\n");
             for (ClaimResult c : r.claims()) {

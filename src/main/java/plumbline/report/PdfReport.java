@@ -404,7 +404,13 @@ public final class PdfReport {
         UnitSystem u = m.units();
         Set<String> combos = new LinkedHashSet<>();
         for (ClaimResult c : review.claims()) combos.add(c.claim().combo());
-        if (combos.isEmpty()) para(doc, "No claims were given: the report lists the model's results only (see the JSON).", body);
+        int given = m.claims().stream().mapToInt(cs -> cs.claims().size()).sum();
+        if (!review.analysis().stable() && given > 0) {
+            para(doc, "The model is unstable, so none of the " + given + " claims can be compared: correct the supports or "
+                    + "releases (section 3) and check again.", bold);
+        } else if (combos.isEmpty()) {
+            para(doc, "No claims were given: the report lists the model's results only (see the JSON).", body);
+        }
         for (String combo : combos) {
             LoadSet set = review.analysis().loadSets().stream().filter(s -> s.name().equals(combo)).findFirst().orElse(null);
             para(doc, combo + (set != null ? "  -  " + set.origin() + ": " + factors(set) : "  -  envelope over all combinations"), bold);

@@ -126,12 +126,15 @@ public final class Determinacy {
         }
         int[] zeros = k.factorSemidefinite(SPARSE_PIVOT_TOLERANCE);
         List<Mechanism> shapes = new ArrayList<>();
+        List<double[]> basis = new ArrayList<>();
         for (int z : zeros) {
             double[] x = k.nullVector(z);
             double[] vec = new double[m];
             for (int i = 0; i < m; i++) vec[i] = x[pos[i]];
-            shapes.add(describe(model, eq, vec, lc));
+            basis.add(vec);
         }
+        if (basis.size() <= 50) basis = separated(basis);
+        for (double[] vec : basis) shapes.add(describe(model, eq, vec, lc));
         int r = m - zeros.length;
         return classify(m, n, r, shapes, 1.0, false);
     }
@@ -160,10 +163,9 @@ public final class Determinacy {
             for (double v : sv) if (v > RANK_TOLERANCE * max) rank++;
             if (rank > 0) condition = sv[rank - 1] / max;
             RealMatrix u = svd.getU();
-            for (int k = rank; k < m; k++) {
-                double[] vec = u.getColumn(k);
-                shapes.add(describe(model, eq, vec, lc));
-            }
+            List<double[]> basis = new ArrayList<>();
+            for (int k = rank; k < m; k++) basis.add(u.getColumn(k));
+            for (double[] vec : separated(basis)) shapes.add(describe(model, eq, vec, lc));
         }
         return classify(m, n, rank, shapes, condition, true);
     }
@@ -184,6 +186,42 @@ public final class Determinacy {
                     + "(smallest to largest singular value %.1e); check for nearly collinear or nearly parallel members or reactions", condition);
         }
         return new Result(c, degree, mech, m, n, rank, counting, disagrees, shapes, condition, remark);
+    }
+
+    /**
+     * A basis of the same mechanism space in reduced row-echelon form (Gauss-Jordan with
+     * the largest pivot of each column): each vector is zero at the others' pivots, which
+     * separates independent mechanisms (a loose stick and a separate linkage) that an SVD
+     * basis mixes.
+     */
+    static List<double[]> separated(List<double[]> basis) {
+        int k = basis.size();
+        if (k <= 1) return basis;
+        int m = basis.get(0).length;
+        double[][] r = new double[k][];
+        for (int i = 0; i < k; i++) r[i] = basis.get(i).clone();
+        double max = 0;
+        for (double[] v : r) for (double x : v) max = Math.max(max, Math.abs(x));
+        int row = 0;
+        for (int col = 0; col < m && row < k; col++) {
+            int best = row;
+            for (int i = row; i < k; i++) if (Math.abs(r[i][col]) > Math.abs(r[best][col])) best = i;
+            if (Math.abs(r[best][col]) <= 1e-9 * max) continue;
+            double[] t = r[row];
+            r[row] = r[best];
+            r[best] = t;
+            double p = r[row][col];
+            for (int j = 0; j < m; j++) r[row][j] /= p;
+            for (int i = 0; i < k; i++) {
+                if (i == row || r[i][col] == 0) continue;
+                double f = r[i][col];
+                for (int j = 0; j < m; j++) r[i][j] -= f * r[row][j];
+            }
+            row++;
+        }
+        List<double[]> out = new ArrayList<>();
+        for (double[] v : r) out.add(v);
+        return out;
     }
 
     /** Words for one mechanism shape (node motions in the equation space, the null space of A^T). */
@@ -214,7 +252,7 @@ public final class Determinacy {
                     + (spinning.size() > 1 ? " can rotate" : " can rotate") + " freely (nothing resists a moment there)";
         } else if (moving.size() == 1) {
             double[] d = motion.get(moving.get(0));
-            text = "node " + moving.get(0) + " can translate " + direction(d[0], d[1]);
+            text = "node " + moving.get(0) + " can translate " + direction(d[0], d[1]) + ": " + members(model, motion, lc);
         } else {
             text = members(model, motion, lc);
         }
