@@ -30,6 +30,10 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = "--pdf", paramLabel = "FILE", description = "write the PDF discrepancy report")
     Path pdf;
 
+    @Option(names = "--figures", paramLabel = "DIR",
+            description = "also write the report's drawings as PNG files into this existing folder")
+    Path figures;
+
     @Option(names = "--tolerance", paramLabel = "PCT", converter = PercentConverter.class,
             description = "relative tolerance for every claim without its own, e.g. 5%% (default: by kind, reactions 3%%, "
                     + "member forces 5%%, deflections 10%%)")
@@ -39,6 +43,6 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
-        return Run.execute(model, claims, json, pdf, "both", tolerance == null ? Double.NaN : tolerance, out, err);
+        return Run.execute(model, claims, json, pdf, figures, "both", tolerance == null ? Double.NaN : tolerance, out, err);
     }
 }

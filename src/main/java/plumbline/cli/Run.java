@@ -31,13 +31,17 @@ final class Run {
         return out;
     }
 
-    static int execute(Path model, List<Path> claims, Path json, Path pdf, String method, double tolerance,
+    static int execute(Path model, List<Path> claims, Path json, Path pdf, Path figures, String method, double tolerance,
                        PrintWriter out, PrintWriter err) {
         Inputs in;
         try {
             in = Inputs.load(model, claims);
             if (json != null) OutputFiles.refuseInputs(json, in.files, "--json");
             if (pdf != null) OutputFiles.refuseInputs(pdf, in.files, "--pdf");
+            if (figures != null && !java.nio.file.Files.isDirectory(figures)) {
+                throw new InputException(new Problem(plumbline.model.SourceRef.none(figures.toString()), "--figures",
+                        "is not an existing folder; expected a folder for the PNG files"));
+            }
         } catch (InputException e) {
             for (Problem p : e.problems()) err.println(p);
             err.println("plumbline: " + e.problems().size() + " input problem" + (e.problems().size() == 1 ? "" : "s")
@@ -78,6 +82,23 @@ final class Run {
             }
         }
         String names = String.join(" and ", a.solutions().keySet()) + (a.solutions().size() == 1 ? " method" : " methods");
+        Map<String, byte[]> pictures = null;
+        if (figures != null) {
+            try {
+                pictures = plumbline.report.Figures.render(r, plumbline.report.PdfReport.governingSets(r));
+            } catch (IOException e) {
+                err.println("plumbline: cannot draw the figures: " + e.getMessage());
+                return Main.INTERNAL;
+            }
+        }
+        if (pictures != null) {
+            try {
+                for (var p : pictures.entrySet()) OutputFiles.writeAtomically(figures.resolve(p.getKey()), p.getValue());
+            } catch (IOException e) {
+                err.println(figures + ": cannot write the figures: " + e.getMessage());
+                return Main.INTERNAL;
+            }
+        }
         if (report != null) {
             try {
                 OutputFiles.writeAtomically(pdf, report);
@@ -90,6 +111,7 @@ final class Run {
         for (String n : notes) out.print(Console.wrap("Note: " + n, "  "));
         if (json != null) out.println("Results written to " + json);
         if (pdf != null) out.println("Report written to " + pdf);
+        if (pictures != null) out.println(pictures.size() + " figures written to " + figures);
         if (!a.stable()) return Main.FLAGGED;
         return r.verdict().equals("ok") ? Main.OK : Main.FLAGGED;
     }

@@ -246,7 +246,7 @@ public final class Drawings {
 
     /** Which function a diagram shows. */
     public enum Kind {
-        AXIAL("Axial force N (tension +)", Drawings.AXIAL, Dimension.FORCE),
+        AXIAL("Axial force N (T tension, solid; C compression, dashed)", Drawings.AXIAL, Dimension.FORCE),
         SHEAR("Shear force V", Drawings.SHEAR, Dimension.FORCE),
         MOMENT("Bending moment M (drawn on the tension face)", Drawings.MOMENT, Dimension.MOMENT),
         DEFLECTION("Deflected shape (exaggerated)", DEFLECTED, Dimension.LENGTH);
@@ -316,6 +316,25 @@ public final class Drawings {
                 }
                 g.setStroke(new BasicStroke(1.5f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 1f, new float[]{5f, 3f}, 0f));
                 g.draw(path);
+                continue;
+            }
+            if (kind == Kind.AXIAL && Math.abs(p.max().value() - p.min().value()) <= 1e-9 * Math.max(peak, 1e-300)) {
+                // a constant axial force: the member drawn in tension (solid) or compression (dashed), value at mid-length
+                double v = p.max().value();
+                boolean compression = v < -1e-9 * peak;
+                g.setColor(kind.color);
+                g.setStroke(compression ? new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[]{5f, 2.5f}, 0f)
+                        : new BasicStroke(2.2f));
+                if (Math.abs(v) > 1e-9 * peak) g.draw(new Line2D.Double(x0, y0, f.x(b.xM()), f.y(b.yM())));
+                String text = Math.abs(v) <= 1e-9 * peak ? "0" : Console.fmt(Math.abs(m.units().fromInternal(v, kind.dimension)))
+                        + (compression ? " C" : " T");
+                double mx = (x0 + f.x(b.xM())) / 2, my = (y0 + f.y(b.yM())) / 2;
+                java.awt.FontMetrics fm = g.getFontMetrics();
+                float tw = fm.stringWidth(text);
+                g.setColor(Color.WHITE);
+                g.fill(new java.awt.geom.Rectangle2D.Double(mx - tw / 2 - 1, my - fm.getAscent() / 2.0 - 1, tw + 2, fm.getAscent() + 2));
+                g.setColor(kind.color);
+                g.drawString(text, (float) (mx - tw / 2), (float) (my + fm.getAscent() / 2.0 - 1));
                 continue;
             }
             path.moveTo(x0, y0);

@@ -476,13 +476,17 @@ public final class PdfReport {
     }
 
     /** Load sets to draw: those of flagged claims first, then of other claims, then the one with the largest moment. */
+    public static List<String> governingSets(Review review) {
+        return new PdfReport(review, null, null, List.of(), null).governingSets();
+    }
+
     List<String> governingSets() {
         Analysis a = review.analysis();
         Set<String> out = new LinkedHashSet<>();
         for (ClaimResult c : review.claims()) if (c.status() != ClaimResult.Status.OK && !c.claim().combo().equals("envelope")) out.add(c.claim().combo());
         for (ClaimResult c : review.claims()) if (c.claim().combo().equals("envelope") && c.governing() != null) out.add(c.governing().split(" with ")[0]);
         for (ClaimResult c : review.claims()) if (!c.claim().combo().equals("envelope")) out.add(c.claim().combo());
-        if (a.stable()) {
+        if (a.stable() && out.isEmpty()) {
             String best = null;
             double bestM = -1;
             for (LoadSet s : a.loadSets()) {
@@ -490,7 +494,8 @@ public final class PdfReport {
                 for (var ms : a.solutions().get(a.primaryEngine()).get(s.name()).representative().members().values()) {
                     mm = Math.max(mm, ms.peaks().value("M_abs"));
                 }
-                if (mm > bestM && (s.combination() || best == null)) {
+                boolean preferred = best == null || (s.combination() && !isCombination(a, best)) || (s.combination() == isCombination(a, best) && mm > bestM);
+                if (preferred) {
                     bestM = mm;
                     best = s.name();
                 }
@@ -499,6 +504,10 @@ public final class PdfReport {
         }
         List<String> l = new ArrayList<>(out);
         return l.subList(0, Math.min(2, l.size()));
+    }
+
+    private static boolean isCombination(Analysis a, String name) {
+        return a.loadSets().stream().anyMatch(s -> s.name().equals(name) && s.combination());
     }
 
     private void diagrams(Document doc, PdfWriter writer, Model m) throws DocumentException {

@@ -80,4 +80,21 @@ class ReportTest {
                 "flag marks follow the statuses");
         assertFalse(unitForce.isEmpty());
     }
+
+    @org.junit.jupiter.api.Test
+    void figuresAreTheSameDrawingsAsPng() throws Exception {
+        Path dir = Files.createTempDirectory("plumbline");
+        CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--claims", "samples/portal-frame-claims.yaml",
+                "--figures", dir.toString());
+        assertEquals(1, r.code(), r.err());
+        java.util.List<Path> pngs = Files.list(dir).filter(p -> p.toString().endsWith(".png")).toList();
+        assertTrue(pngs.stream().anyMatch(p -> p.getFileName().toString().equals("model.png")));
+        assertTrue(pngs.stream().anyMatch(p -> p.getFileName().toString().equals("ULS-W-moment.png")), pngs.toString());
+        for (Path p : pngs) {
+            java.awt.image.BufferedImage img = javax.imageio.ImageIO.read(p.toFile());
+            int dark = 0;
+            for (int x = 0; x < img.getWidth(); x += 3) for (int y = 0; y < img.getHeight(); y += 3) if ((img.getRGB(x, y) & 0xff) < 128) dark++;
+            assertTrue(dark > 20, p + " has a drawing on it");
+        }
+    }
 }
