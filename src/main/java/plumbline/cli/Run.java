@@ -31,6 +31,18 @@ final class Run {
         return out;
     }
 
+    /** At most this many problems are printed; the rest are counted (a broken list can hold thousands). */
+    static final int MAX_PROBLEMS_SHOWN = 50;
+
+    static int inputProblems(InputException e, PrintWriter err) {
+        List<Problem> ps = e.problems();
+        for (int i = 0; i < Math.min(ps.size(), MAX_PROBLEMS_SHOWN); i++) err.println(ps.get(i));
+        if (ps.size() > MAX_PROBLEMS_SHOWN) err.println("... and " + (ps.size() - MAX_PROBLEMS_SHOWN) + " more problems");
+        err.println("plumbline: " + ps.size() + " input problem" + (ps.size() == 1 ? "" : "s")
+                + "; nothing was analysed and no file was written");
+        return Main.INPUT;
+    }
+
     static int execute(Path model, List<Path> claims, Path json, Path pdf, Path figures, String method, double tolerance,
                        PrintWriter out, PrintWriter err) {
         Inputs in;
@@ -43,10 +55,7 @@ final class Run {
                         "is not an existing folder; expected a folder for the PNG files"));
             }
         } catch (InputException e) {
-            for (Problem p : e.problems()) err.println(p);
-            err.println("plumbline: " + e.problems().size() + " input problem" + (e.problems().size() == 1 ? "" : "s")
-                    + "; nothing was analysed and no file was written");
-            return Main.INPUT;
+            return inputProblems(e, err);
         }
         String tooLarge = ForceEngine.tooLarge(in.model);
         if (method.equals("force") && tooLarge != null) {

@@ -33,8 +33,7 @@ final class TemplateCommand implements Callable<Integer> {
         try {
             m = Inputs.load(model, List.of()).model;
         } catch (InputException e) {
-            for (Problem p : e.problems()) spec.commandLine().getErr().println(p);
-            return Main.INPUT;
+            return Run.inputProblems(e, spec.commandLine().getErr());
         }
         out.println("# Claims skeleton for " + model + ": replace each ~ with the claimed value,");
         out.println("# delete what is not claimed, then: plumbline check " + model + " --claims THIS_FILE");

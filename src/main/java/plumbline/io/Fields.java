@@ -144,6 +144,9 @@ final class Fields {
         return quantityOf(t, field(key), d, units, problems);
     }
 
+    /** Written numbers beyond this magnitude are slips, not structural quantities (common practice). */
+    static final double MAX_MAGNITUDE = 1e15;
+
     static double quantityOf(Tree t, String field, Dimension d, UnitSystem units, List<Problem> problems) {
         if (!(t instanceof Tree.Scalar s) || s.kind() == Tree.Scalar.Kind.NULL || s.kind() == Tree.Scalar.Kind.BOOLEAN) {
             problems.add(new Problem(t.at(), field, "found " + t.describe() + "; expected a number or a string such as '"
@@ -151,7 +154,15 @@ final class Fields {
             return Double.NaN;
         }
         try {
+            if (s.text().length() > TreeReader.MAX_NUMBER_LENGTH + 40) {
+                problems.add(new Problem(t.at(), field, "value of " + s.text().length() + " characters; expected a number and a unit"));
+                return Double.NaN;
+            }
             Units.Written w = Units.parseQuantity(s.text());
+            if (Math.abs(w.value()) > MAX_MAGNITUDE) {
+                problems.add(new Problem(t.at(), field, "value " + s.text() + " is beyond 1e15; expected a structural quantity"));
+                return Double.NaN;
+            }
             if (w.unit() == null) return units.toInternal(w.value(), d);
             if (!w.unit().dimension().matchesIgnoringAngle(d) || (d.angle() > 0 && w.unit().dimension().angle() != d.angle())) {
                 problems.add(new Problem(t.at(), field, "unit '" + w.unit().symbol() + "' is "

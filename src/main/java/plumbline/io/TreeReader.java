@@ -28,8 +28,10 @@ final class TreeReader {
     static final int MAX_DEPTH = 40;
     /** Largest input file accepted, in characters. */
     static final long MAX_CHARS = 64L * 1024 * 1024;
-    /** Longest number accepted, in digits. */
+    /** Longest number accepted, in characters (a double holds 17 significant digits). */
     static final int MAX_NUMBER_LENGTH = 60;
+    /** Longest text value accepted (a title or a source line, not a document). */
+    static final int MAX_STRING_LENGTH = 10_000;
 
     private final String file;
     private final List<Problem> problems = new ArrayList<>();
@@ -99,6 +101,23 @@ final class TreeReader {
                     "nesting deeper than " + MAX_DEPTH + " levels; a model needs only a few"));
         }
         JsonToken t = p.currentToken();
+        if (p instanceof com.fasterxml.jackson.dataformat.yaml.YAMLParser y) {
+            // refused rather than half-supported: an alias is not expanded by the reader (and expansion
+            // is the classic memory bomb), a tag asks for a type the file format does not have
+            if (y.isCurrentAlias()) {
+                throw new InputException(new Problem(at, "(document)", "YAML alias '*" + p.getText()
+                        + "' is not read; expected the value written out in full"));
+            }
+            if (y.getCurrentAnchor() != null) {
+                throw new InputException(new Problem(at, "(document)", "YAML anchor '&" + y.getCurrentAnchor()
+                        + "' is not read; expected plain values (no anchors or aliases)"));
+            }
+            Object tag = y.getTypeId();
+            if (tag != null) {
+                throw new InputException(new Problem(at, "(document)", "YAML tag '" + tag
+                        + "' is not read; expected plain values without type tags"));
+            }
+        }
         switch (t) {
             case START_OBJECT: {
                 Map<String, Tree.Entry> entries = new LinkedHashMap<>();
@@ -125,6 +144,10 @@ final class TreeReader {
             }
             case VALUE_NUMBER_INT:
             case VALUE_NUMBER_FLOAT:
+                if (p.getText().length() > MAX_NUMBER_LENGTH) {
+                    throw new InputException(new Problem(at, "(document)", "a number of " + p.getText().length()
+                            + " characters; at most " + MAX_NUMBER_LENGTH + " are read"));
+                }
                 return new Tree.Scalar(p.getText(), Tree.Scalar.Kind.NUMBER, at);
             case VALUE_TRUE:
             case VALUE_FALSE:
@@ -132,6 +155,10 @@ final class TreeReader {
             case VALUE_NULL:
                 return new Tree.Scalar("", Tree.Scalar.Kind.NULL, at);
             case VALUE_STRING:
+                if (p.getText().length() > MAX_STRING_LENGTH) {
+                    throw new InputException(new Problem(at, "(document)", "a text value of " + p.getText().length()
+                            + " characters; at most " + MAX_STRING_LENGTH + " are read"));
+                }
                 return new Tree.Scalar(p.getText(), Tree.Scalar.Kind.STRING, at);
             default:
                 throw new InputException(new Problem(at, "(document)", "unexpected " + t + " in the file"));
