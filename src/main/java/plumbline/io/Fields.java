@@ -146,6 +146,8 @@ final class Fields {
 
     /** Written numbers beyond this magnitude are slips, not structural quantities (common practice). */
     static final double MAX_MAGNITUDE = 1e15;
+    /** Non-zero written numbers below this magnitude are slips (or denormals), not structural quantities. */
+    static final double MIN_MAGNITUDE = 1e-20;
 
     static double quantityOf(Tree t, String field, Dimension d, UnitSystem units, List<Problem> problems) {
         if (!(t instanceof Tree.Scalar s) || s.kind() == Tree.Scalar.Kind.NULL || s.kind() == Tree.Scalar.Kind.BOOLEAN) {
@@ -159,6 +161,10 @@ final class Fields {
                 return Double.NaN;
             }
             Units.Written w = Units.parseQuantity(s.text());
+            if (w.value() != 0 && Math.abs(w.value()) < MIN_MAGNITUDE) {
+                problems.add(new Problem(t.at(), field, "value " + s.text() + " is below 1e-20; expected zero or a structural quantity"));
+                return Double.NaN;
+            }
             if (Math.abs(w.value()) > MAX_MAGNITUDE) {
                 problems.add(new Problem(t.at(), field, "value " + s.text() + " is beyond 1e15; expected a structural quantity"));
                 return Double.NaN;

@@ -58,6 +58,21 @@ public final class Agreement {
                 }
             }
         }
+        // translations are also judged against the members' own elastic deformations |N| L/EA + |M| L^2/EI,
+        // so that where nothing moves (a restrained temperature change) rounding is not a difference
+        for (Solution x : a.values()) {
+            for (var ms : x.members().entrySet()) {
+                Member mem = model.member(ms.getKey());
+                double len = model.lengthM(mem), e = model.materialOf(mem).ePa();
+                double axial = Math.max(Math.abs(ms.getValue().peaks().value("N_abs")), 0) * len / (e * model.sectionOf(mem).areaM2());
+                double ei = e * model.sectionOf(mem).inertiaM4();
+                double bending = Double.isFinite(ei) && ei > 0 ? ms.getValue().peaks().value("M_abs") * len * len / ei : 0;
+                scale[2] = Math.max(scale[2], axial + bending);
+            }
+        }
+        // a rotation is judged against the translations over the model's size too: where every node
+        // rotation is zero (a beam fixed at both ends) one engine's 1e-18 rad is not a difference
+        scale[3] = Math.max(scale[3], scale[2] / extent);
         for (var e : a.entrySet()) {
             Solution s = e.getValue(), t = b.get(e.getKey());
             for (var r : s.reactions().entrySet()) {
