@@ -72,6 +72,10 @@ public final class SkylineLdl {
                 singularAt = j;
                 return false;
             }
+            if (d / original < smallestPivotRatio) {
+                smallestPivotRatio = d / original;
+                smallestPivotAt = j;
+            }
             a[sj + j - mj] = d;
         }
         return true;
@@ -125,6 +129,22 @@ public final class SkylineLdl {
             for (int r = mk; r < k; r++) x[r] -= a[sk + r - mk] * xk;
         }
         return x;
+    }
+
+    private double smallestPivotRatio = 1;
+    private int smallestPivotAt = -1;
+
+    /**
+     * The smallest ratio of a pivot to its original diagonal after {@link #factor()}: a cheap
+     * condition indicator (about 1/condition for the freedom where it occurs); digits lost
+     * there are about -log10 of it.
+     */
+    public double smallestPivotRatio() {
+        return smallestPivotRatio;
+    }
+
+    public int smallestPivotAt() {
+        return smallestPivotAt;
     }
 
     public int singularAt() {

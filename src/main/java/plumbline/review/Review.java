@@ -64,6 +64,13 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         else verdict = "ok";
         if (verdict.equals("ok") && eq.stream().anyMatch(e -> !e.balanced())) verdict = "marginal";
         List<Plausibility.Warning> warnings = new ArrayList<>(Plausibility.check(a.model()));
+        for (var e : a.engines().values()) {
+            for (String n : e.notes()) {
+                if (n.startsWith("warning:")) warnings.add(new Plausibility.Warning("a solution loses digits when the stiffness "
+                        + "matrix is nearly singular (condition estimate from the factorization)", e.engine() + " method",
+                        n.substring("warning:".length()).trim()));
+            }
+        }
         if (primary != null) {
             for (LoadSet set : a.loadSets()) {
                 LoadSetResult r = a.solutions().get(primary).get(set.name());

@@ -36,6 +36,14 @@ import plumbline.solve.Solution;
  */
 public final class StiffnessEngine implements Engine {
 
+    /**
+     * A pivot ratio below this loses more than eight of the sixteen digits of double
+     * precision: the results are reported with a warning naming the place.
+     */
+    public static final double ILL_CONDITIONED = 1e-8;
+    /** Notes that begin with this word are warnings for the checker. */
+    public static final String ILL_CONDITIONED_NOTE = "warning:";
+
     @Override
     public String name() {
         return "stiffness";
@@ -121,16 +129,29 @@ public final class StiffnessEngine implements Engine {
             for (int n = 0; n < nn; n++) for (int d = 0; d < 3; d++) if (dof[n][d] == bad) {
                 where = "node " + nodes.get(n).name() + " " + new String[]{"ux", "uy", "rz"}[d];
             }
-            return EngineResult.unstable(name(), "the stiffness matrix is singular at " + where
-                    + ": the structure can move there without straining any member (a mechanism)");
+            return EngineResult.unstable(name(), "the stiffness matrix is singular to working precision at " + where
+                    + " (pivot below " + SkylineLdl.PIVOT_TOLERANCE + " of its diagonal): the structure can move there without "
+                    + "straining any member, or nearly so (a mechanism, or a near-mechanism such as a very soft spring)");
         }
 
+        List<String> notes = new ArrayList<>();
+        notes.add("stiffness matrix: " + free + " free freedoms, " + k.storedEntries() + " stored entries (skyline, RCM order)");
+        if (k.smallestPivotRatio() < ILL_CONDITIONED) {
+            int at = k.smallestPivotAt();
+            String where = "";
+            for (int n = 0; n < nn; n++) for (int d = 0; d < 3; d++) if (dof[n][d] == at) where = nodes.get(n).name() + " " + new String[]{"ux", "uy", "rz"}[d];
+            String node = where.isEmpty() ? "" : where.substring(0, where.indexOf(' '));
+            List<String> at2 = new ArrayList<>();
+            for (Member m : model.members().values()) if (m.from().equals(node) || m.to().equals(node)) at2.add(m.name());
+            notes.add(String.format(java.util.Locale.ROOT, "%s the stiffness matrix is nearly singular at %s (pivot ratio %.1e, "
+                    + "about %d digits lost): a near-mechanism or very unequal stiffnesses; members there: %s", ILL_CONDITIONED_NOTE,
+                    where, k.smallestPivotRatio(), (int) Math.round(-Math.log10(k.smallestPivotRatio())), String.join(", ", at2)));
+        }
         Map<String, Solution> cases = new LinkedHashMap<>();
         for (LoadCase c : model.loadCases()) {
             cases.put(c.name(), solveCase(model, c, nodes, index, dof, fixed, restrained, free, elements, frameAngle, k));
         }
-        return new EngineResult(name(), true, null, cases,
-                List.of("stiffness matrix: " + free + " free freedoms, " + k.storedEntries() + " stored entries (skyline, RCM order)"));
+        return new EngineResult(name(), true, null, cases, notes);
     }
 
     private Solution solveCase(Model model, LoadCase c, List<Node> nodes, Map<String, Integer> index, int[][] dof,
