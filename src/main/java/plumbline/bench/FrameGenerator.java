@@ -70,4 +70,50 @@ public final class FrameGenerator {
     public static int frameMembers(int bays, int storeys) {
         return (bays + 1) * storeys + bays * storeys;
     }
+
+    /** A Pratt truss of {@code panels} panels (about 5 members per panel), pinned and on a roller, loaded at every bottom node. */
+    public static String truss(int panels) {
+        StringBuilder sb = new StringBuilder(head());
+        sb.append("nodes:\n");
+        for (int i = 0; i <= panels; i++) sb.append(String.format(Locale.ROOT, "  L%d: [%.3f, 0]%n", i, 3.0 * i));
+        for (int i = 1; i < panels; i++) sb.append(String.format(Locale.ROOT, "  U%d: [%.3f, 2.5]%n", i, 3.0 * i));
+        sb.append("supports:\n  L0: pinned\n  L").append(panels).append(": roller\n");
+        sb.append("members:\n");
+        for (int i = 0; i < panels; i++) sb.append("  B").append(i).append(": {from: L").append(i).append(", to: L").append(i + 1).append(", section: COL, truss: true}\n");
+        for (int i = 1; i < panels - 1; i++) sb.append("  T").append(i).append(": {from: U").append(i).append(", to: U").append(i + 1).append(", section: COL, truss: true}\n");
+        sb.append("  E0: {from: L0, to: U1, section: BEAM, truss: true}\n");
+        sb.append("  E1: {from: U").append(panels - 1).append(", to: L").append(panels).append(", section: BEAM, truss: true}\n");
+        for (int i = 1; i < panels; i++) sb.append("  V").append(i).append(": {from: L").append(i).append(", to: U").append(i).append(", section: BEAM, truss: true}\n");
+        for (int i = 1; i < panels - 1; i++) {
+            boolean left = i < panels / 2;
+            sb.append("  D").append(i).append(": {from: ").append(left ? "U" + i : "L" + i).append(", to: ").append(left ? "L" + (i + 1) : "U" + (i + 1)).append(", section: BEAM, truss: true}\n");
+        }
+        sb.append("loads:\n  D:\n    type: dead\n    node_loads:\n");
+        for (int i = 1; i < panels; i++) sb.append("      - {node: L").append(i).append(", Fy: -20}\n");
+        sb.append("  L:\n    type: live\n    node_loads:\n");
+        for (int i = 1; i < panels; i++) sb.append("      - {node: L").append(i).append(", Fy: -15}\n");
+        sb.append("  W:\n    type: wind\n    node_loads:\n      - {node: U1, Fx: 10}\n");
+        sb.append("combinations:\n  C1: {D: 1.35, L: 1.5}\n  C2: {D: 1.0, W: 1.5}\n");
+        return sb.toString();
+    }
+
+    /** A continuous beam of {@code spans} equal spans on pinned and roller supports. */
+    public static String beam(int spans) {
+        StringBuilder sb = new StringBuilder(head());
+        sb.append("nodes:\n");
+        for (int i = 0; i <= spans; i++) sb.append(String.format(Locale.ROOT, "  N%d: [%.3f, 0]%n", i, 5.0 * i));
+        sb.append("supports:\n  N0: pinned\n");
+        for (int i = 1; i <= spans; i++) sb.append("  N").append(i).append(": roller\n");
+        sb.append("members:\n");
+        StringBuilder all = new StringBuilder();
+        for (int i = 0; i < spans; i++) {
+            sb.append("  S").append(i).append(": {from: N").append(i).append(", to: N").append(i + 1).append(", section: BEAM}\n");
+            if (i > 0) all.append(", ");
+            all.append("S").append(i);
+        }
+        sb.append("loads:\n  D: {type: dead, self_weight: true, member_loads: [{members: [").append(all).append("], w: -10}]}\n");
+        sb.append("  L: {type: live, member_loads: [{members: [").append(all).append("], w: -8}]}\n");
+        sb.append("combinations:\n  C1: {D: 1.35, L: 1.5}\n  C2: {D: 1.0, L: 1.0}\n");
+        return sb.toString();
+    }
 }

@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
  */
 @Command(name = "plumbline", mixinStandardHelpOptions = true, version = "plumbline 1.0.0",
         description = "Independent check of plane frame, beam and truss models and of the results claimed for them.",
-        subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, UnitsCommand.class, SchemaCommand.class,
+        subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, UnitsCommand.class, SchemaCommand.class, BenchCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 

@@ -46,6 +46,9 @@ import plumbline.statics.EquilibriumMatrix;
  */
 public final class ForceEngine implements Engine {
 
+    /** The working (flexibility matrix, compatibility terms) is listed in full up to this many redundants. */
+    static final int WORKING_SHOWN = 12;
+
     /** Columns whose residual norm after projection falls below this fraction of their own norm add no rank. */
     static final double INDEPENDENCE_TOLERANCE = 1e-9;
 
@@ -54,7 +57,7 @@ public final class ForceEngine implements Engine {
      * structure, LU of the primary equilibrium matrix): cost grows as the cube of the
      * number of node equations. Above this many it is not run.
      */
-    public static final int MAX_EQUATIONS = 1200;
+    public static final int MAX_EQUATIONS = 1100;
 
     /** Why the model is too large for this engine, or null when it is not. */
     public static String tooLarge(Model model) {
@@ -99,29 +102,47 @@ public final class ForceEngine implements Engine {
                 scaled[i][j] = v;
             }
         }
+        // Gauss-Jordan selection of the basis, column by column in order of preference: the basis
+        // vectors are kept in reduced row-echelon form (each zero at the others' pivot rows), so a
+        // new column is reduced by at most the pivots of its own six non-zeros
         List<Integer> basic = new ArrayList<>();
-        List<double[]> q = new ArrayList<>();
+        List<double[]> pivotVectors = new ArrayList<>();
+        int[] pivotOfRow = new int[m];
+        java.util.Arrays.fill(pivotOfRow, -1);
+        List<Integer> pivotRows = new ArrayList<>();
         for (int j : order) {
             if (named.contains(unk.get(j).label())) continue;
             if (basic.size() == m) break;
             double[] v = new double[m];
-            for (int i = 0; i < m; i++) v[i] = scaled[i][j];
-            double norm0 = norm(v);
+            double norm0 = 0;
+            for (int i = 0; i < m; i++) {
+                v[i] = scaled[i][j];
+                norm0 = Math.max(norm0, Math.abs(v[i]));
+            }
             if (norm0 == 0) continue;
-            for (double[] b : q) {
-                double d = dot(v, b);
-                for (int i = 0; i < m; i++) v[i] -= d * b[i];
+            for (int i = 0; i < m; i++) {
+                if (v[i] == 0 || pivotOfRow[i] < 0) continue;
+                double f = v[i];
+                double[] b = pivotVectors.get(pivotOfRow[i]);
+                for (int t = 0; t < m; t++) if (b[t] != 0) v[t] -= f * b[t];
+                v[i] = 0;
             }
-            for (double[] b : q) { // second pass for orthogonality
-                double d = dot(v, b);
-                for (int i = 0; i < m; i++) v[i] -= d * b[i];
+            int q = -1;
+            for (int i = 0; i < m; i++) if (pivotOfRow[i] < 0 && (q < 0 || Math.abs(v[i]) > Math.abs(v[q]))) q = i;
+            if (q < 0 || Math.abs(v[q]) <= INDEPENDENCE_TOLERANCE * norm0) continue;
+            double pv = v[q];
+            for (int t = 0; t < m; t++) v[t] /= pv;
+            v[q] = 1;
+            for (double[] b : pivotVectors) {
+                double f = b[q];
+                if (f == 0) continue;
+                for (int t = 0; t < m; t++) if (v[t] != 0) b[t] -= f * v[t];
+                b[q] = 0;
             }
-            double nv = norm(v);
-            if (nv > INDEPENDENCE_TOLERANCE * norm0) {
-                for (int i = 0; i < m; i++) v[i] /= nv;
-                q.add(v);
-                basic.add(j);
-            }
+            pivotOfRow[q] = pivotVectors.size();
+            pivotVectors.add(v);
+            pivotRows.add(q);
+            basic.add(j);
         }
         if (basic.size() < m) {
             return EngineResult.unstable(name(), "the equilibrium equations have rank " + basic.size() + " < " + m
@@ -147,14 +168,16 @@ public final class ForceEngine implements Engine {
         }
         // flexibility of every unknown (block diagonal per member, 1/k per spring)
         Flexibility flex = Flexibility.of(model, eq);
-        RealMatrix xm = r == 0 ? null : new Array2DRowRealMatrix(x, false);
-        RealMatrix delta = r == 0 ? null : xm.transpose().multiply(new Array2DRowRealMatrix(flex.times(x), false));
+        RealMatrix delta = r == 0 ? null : new Array2DRowRealMatrix(transposeTimes(x, flex.times(x)), false);
         DecompositionSolver compat = r == 0 ? null : new LUDecomposition(delta, 0).getSolver();
         if (r > 0 && !compat.isNonSingular()) {
             return EngineResult.unstable(name(), "the compatibility equations are singular (a redundant with no flexibility)");
         }
-        // unit virtual loads at every node equation: A_B x_v = -e_i
-        RealMatrix virtualBasic = primary.solve(new Array2DRowRealMatrix(negIdentity(m), false));
+        // unit virtual loads at every node equation: A_B x_v = -e_i, so u_i = x_v . w = -(A_B^-T w_B)_i:
+        // one solve with the transposed primary matrix per load case gives every displacement
+        double[][] abT = new double[m][m];
+        for (int i = 0; i < m; i++) for (int k = 0; k < m; k++) abT[k][i] = ab[i][k];
+        DecompositionSolver primaryT = new LUDecomposition(new Array2DRowRealMatrix(abT, false), 0).getSolver();
 
         Map<String, Integer> row = new HashMap<>();
         for (int i = 0; i < m; i++) {
@@ -166,7 +189,8 @@ public final class ForceEngine implements Engine {
         working.append("redundants: ").append(r == 0 ? "none (statically determinate: solved by equilibrium alone)"
                 : String.join(", ", redundant.stream().map(j -> unk.get(j).label()).toList()));
         notes.add(working.toString());
-        if (r > 0) notes.add("flexibility coefficients delta_ij (SI): " + matrixText(delta.getData()));
+        if (r > 0 && r <= WORKING_SHOWN) notes.add("flexibility coefficients delta_ij (SI): " + matrixText(delta.getData()));
+        else if (r > 0) notes.add("flexibility coefficients: a " + r + " x " + r + " matrix (listed for up to " + WORKING_SHOWN + " redundants)");
         for (LoadCase c : model.loadCases()) {
             Map<String, MemberActions> actions = MemberActions.of(model, c);
             double[] p = new double[m];
@@ -195,11 +219,15 @@ public final class ForceEngine implements Engine {
             for (int j = 0; j < n; j++) g[j] = fx0[j] + e0[j] - d[j];
             double[] z = new double[r];
             if (r > 0) {
-                double[] delta0 = xm.transpose().operate(g);
+                double[] delta0 = new double[r];
+                for (int j = 0; j < n; j++) {
+                    if (g[j] == 0) continue;
+                    for (int k = 0; k < r; k++) delta0[k] += x[j][k] * g[j];
+                }
                 double[] neg = new double[r];
                 for (int k = 0; k < r; k++) neg[k] = -delta0[k];
                 z = compat.solve(new org.apache.commons.math3.linear.ArrayRealVector(neg, false)).toArray();
-                notes.add("case " + c.name() + ": Delta_i0 = " + vectorText(delta0) + "; redundants = " + vectorText(z));
+                if (r <= WORKING_SHOWN) notes.add("case " + c.name() + ": Delta_i0 = " + vectorText(delta0) + "; redundants = " + vectorText(z));
             }
             double[] xs = x0.clone();
             for (int j = 0; j < n; j++) for (int k = 0; k < r; k++) xs[j] += x[j][k] * z[k];
@@ -207,12 +235,9 @@ public final class ForceEngine implements Engine {
             double[] work = new double[n];
             for (int j = 0; j < n; j++) work[j] = fxs[j] + e0[j] - d[j];
             // displacement at equation i: the virtual force system's work on the real deformations
-            double[] u = new double[m];
-            for (int i = 0; i < m; i++) {
-                double s = 0;
-                for (int b = 0; b < m; b++) s += virtualBasic.getEntry(b, i) * work[basic.get(b)];
-                u[i] = s;
-            }
+            double[] wb = new double[m];
+            for (int b = 0; b < m; b++) wb[b] = -work[basic.get(b)];
+            double[] u = primaryT.solve(new org.apache.commons.math3.linear.ArrayRealVector(wb, false)).toArray();
             cases.put(c.name(), assemble(model, eq, c, actions, particular, xs, u, row));
         }
         return new EngineResult(name(), true, null, cases, notes);
@@ -312,10 +337,23 @@ public final class ForceEngine implements Engine {
         return new Solution(c.name(), disp, reactions, members, res);
     }
 
-    private static double[][] negIdentity(int m) {
-        double[][] a = new double[m][m];
-        for (int i = 0; i < m; i++) a[i][i] = -1;
-        return a;
+    /** X^T Y for two n x r arrays, skipping the zeros of X (self-stress states are often local). */
+    static double[][] transposeTimes(double[][] x, double[][] y) {
+        int n = x.length, r = n == 0 ? 0 : x[0].length;
+        double[][] out = new double[r][r];
+        int[] nz = new int[r];
+        for (int j = 0; j < n; j++) {
+            int c = 0;
+            for (int k = 0; k < r; k++) if (x[j][k] != 0) nz[c++] = k;
+            double[] yj = y[j];
+            for (int p = 0; p < c; p++) {
+                int a = nz[p];
+                double xa = x[j][a];
+                double[] row = out[a];
+                for (int b = 0; b < r; b++) row[b] += xa * yj[b];
+            }
+        }
+        return out;
     }
 
     private static double norm(double[] v) {
