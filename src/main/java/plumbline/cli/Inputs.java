@@ -34,6 +34,17 @@ final class Inputs {
         Model m = ModelReader.read(modelFile);
         List<Problem> problems = new ArrayList<>(StructureCheck.check(m));
         if (!problems.isEmpty()) throw new InputException(problems);
+        if (!m.redundants().isEmpty()) {
+            List<String> labels = plumbline.statics.EquilibriumMatrix.of(m).unknowns().stream()
+                    .map(plumbline.statics.EquilibriumMatrix.Unknown::label).toList();
+            for (String r : m.redundants()) {
+                if (!labels.contains(r)) {
+                    problems.add(new Problem(plumbline.model.SourceRef.none(m.file()), "force_method.redundants",
+                            "'" + r + "' is not an independent force of this model; expected one of " + String.join(", ", labels)));
+                }
+            }
+            if (!problems.isEmpty()) throw new InputException(problems);
+        }
         List<ClaimSet> sets = new ArrayList<>();
         for (Path p : claimFiles) {
             try {

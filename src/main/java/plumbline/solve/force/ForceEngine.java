@@ -189,6 +189,7 @@ public final class ForceEngine implements Engine {
         working.append("redundants: ").append(r == 0 ? "none (statically determinate: solved by equilibrium alone)"
                 : String.join(", ", redundant.stream().map(j -> unk.get(j).label()).toList()));
         notes.add(working.toString());
+        if (r == 0 && model.members().values().stream().allMatch(Member::truss)) notes.add(jointOrder(model));
         if (r > 0 && r <= WORKING_SHOWN) notes.add("flexibility coefficients delta_ij (SI): " + matrixText(delta.getData()));
         else if (r > 0) notes.add("flexibility coefficients: a " + r + " x " + r + " matrix (listed for up to " + WORKING_SHOWN + " redundants)");
         for (LoadCase c : model.loadCases()) {
@@ -335,6 +336,53 @@ public final class ForceEngine implements Engine {
         Solution s = new Solution(c.name(), disp, reactions, members, 0);
         double res = Equilibrium.residual(model, s, Equilibrium.nodeLoads(model, Map.of(c.name(), 1.0)));
         return new Solution(c.name(), disp, reactions, members, res);
+    }
+
+    /**
+     * The order in which the method of joints solves a determinate truss: repeatedly a joint
+     * with at most two unknown forces (member forces and reaction components), after the
+     * reactions from the equilibrium of the whole truss when no joint starts with two.
+     */
+    static String jointOrder(Model model) {
+        Map<String, List<Member>> at = new LinkedHashMap<>();
+        for (Node n : model.nodes().values()) at.put(n.name(), new ArrayList<>());
+        for (Member m : model.members().values()) {
+            at.get(m.from()).add(m);
+            at.get(m.to()).add(m);
+        }
+        java.util.Set<String> known = new java.util.HashSet<>();
+        java.util.Set<String> done = new java.util.HashSet<>();
+        boolean reactionsKnown = false;
+        List<String> steps = new ArrayList<>();
+        while (done.size() < at.size()) {
+            String pick = null;
+            List<String> unknowns = null;
+            for (var e : at.entrySet()) {
+                if (done.contains(e.getKey())) continue;
+                List<String> u = new ArrayList<>();
+                for (Member m : e.getValue()) if (!known.contains(m.name())) u.add(m.name());
+                Support s = model.supports().get(e.getKey());
+                if (s != null && !reactionsKnown) for (int d = 0; d < 2; d++) if (s.reacts(d)) u.add(e.getKey() + (d == 0 ? ".Rx" : ".Ry"));
+                if (u.size() <= 2) {
+                    pick = e.getKey();
+                    unknowns = u;
+                    break;
+                }
+            }
+            if (pick == null) {
+                if (reactionsKnown) {
+                    steps.add("(no joint with two unknowns is left: the rest needs simultaneous equations or the method of sections)");
+                    break;
+                }
+                reactionsKnown = true;
+                steps.add("reactions from the equilibrium of the whole truss");
+                continue;
+            }
+            for (String u : unknowns) if (!u.contains(".")) known.add(u);
+            done.add(pick);
+            steps.add("joint " + pick + (unknowns.isEmpty() ? " (check)" : " (" + String.join(", ", unknowns) + ")"));
+        }
+        return "method of joints order: " + String.join("; ", steps);
     }
 
     /** X^T Y for two n x r arrays, skipping the zeros of X (self-stress states are often local). */
