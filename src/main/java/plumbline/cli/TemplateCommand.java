@@ -35,8 +35,9 @@ final class TemplateCommand implements Callable<Integer> {
         } catch (InputException e) {
             return Run.inputProblems(e, spec.commandLine().getErr());
         }
-        out.println("# Claims skeleton for " + model + ": replace each ~ with the claimed value,");
-        out.println("# delete what is not claimed, then: plumbline check " + model + " --claims THIS_FILE");
+        out.println("# Claims skeleton for " + model.getFileName() + ": replace each ~ with the claimed value;");
+        out.println("# a ~ left in place is not claimed. Then run:");
+        out.println("#   plumbline check " + model.getFileName() + " --claims THIS_FILE");
         out.println("claims:");
         out.println("  source: ~   # e.g. the originator's calc package and revision");
         out.println("  units: {force: " + m.units().force().symbol() + ", length: " + m.units().length().symbol() + "}");

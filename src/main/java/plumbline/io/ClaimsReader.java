@@ -71,7 +71,8 @@ public final class ClaimsReader {
         Fields f = Fields.of(t, path, problems, List.of("source", "units", "tolerance", "reactions", "members",
                 "displacements"), "a map with source, units, tolerance, reactions, members, displacements");
         if (f == null) return null;
-        String source = f.text("source", false, "free text");
+        String source = f.get("source") instanceof Tree.Scalar sc && sc.kind() == Tree.Scalar.Kind.NULL ? null
+                : f.text("source", false, "free text");
         UnitSystem units = model.units();
         if (f.has("units")) {
             UnitSystem u = ModelReader.unitSystem(f.get("units"), f.field("units"), problems, true, f.at("units"));
@@ -129,9 +130,13 @@ public final class ClaimsReader {
             String name = g.text(nameKey, true, "a " + nameKey + " name");
             String combo = g.text("combo", true, "a combination, a load case or envelope");
             double tol = g.has("tolerance") ? tolerance(g.get("tolerance"), g.field("tolerance"), problems) : Double.NaN;
-            int n = 0;
+            int n = 0, blank = 0;
             for (String q : quantities) {
                 if (!g.has(q)) continue;
+                if (g.get(q) instanceof Tree.Scalar sc && sc.kind() == Tree.Scalar.Kind.NULL) {
+                    blank++; // a ~ left in a template: not claimed
+                    continue;
+                }
                 n++;
                 Dimension d = dimensionOf(kind, q);
                 Tree v = g.get(q);
@@ -154,7 +159,7 @@ public final class ClaimsReader {
                     out.add(new Claim(kind, name, combo, q, si, d, written, unit, tol, g.at(q)));
                 }
             }
-            if (n == 0) {
+            if (n == 0 && blank == 0) {
                 problems.add(new Problem(items.get(i).at(), p, "no claimed value; expected at least one of "
                         + String.join(", ", quantities)));
             }

@@ -33,4 +33,17 @@ class SamplesTest {
             assertEquals(c.get("id").equals(slip) ? "mismatch" : "ok", c.get("status"), c.toString());
         }
     }
+
+    @org.junit.jupiter.api.Test
+    void templateFilledInPartIsACheckableClaimsFile() throws Exception {
+        CliRunner t = CliRunner.run("template", "samples/portal-frame.yaml");
+        assertEquals(0, t.code(), t.err());
+        // fill one value in: the vertical reaction at A under G (16.0 kN by symmetry of the roof load, statics by hand)
+        String filled = t.out().replaceFirst("\\{node: A, combo: G, Fx: ~, Fy: ~", "{node: A, combo: G, Fx: ~, Fy: 16.0");
+        Path f = Files.createTempDirectory("plumbline").resolve("claims.yaml");
+        Files.writeString(f, filled);
+        CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--claims", f.toString());
+        assertEquals(0, r.code(), r.err() + r.out());
+        assertTrue(r.out().contains("Claims: 1 ok, 0 marginal, 0 mismatch"), r.out());
+    }
 }
