@@ -31,6 +31,9 @@ final class Run {
         return out;
     }
 
+    /** Results of models with more members than this are written as compact JSON. */
+    static final int COMPACT_JSON_ABOVE = 500;
+
     /** At most this many problems are printed; the rest are counted (a broken list can hold thousands). */
     static final int MAX_PROBLEMS_SHOWN = 50;
 
@@ -84,7 +87,8 @@ final class Run {
             Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
             tree.put("notes", notes);
             try {
-                OutputFiles.writeAtomically(json, OutputFiles.json(tree));
+                // large results are written compact: indentation would double a file of many megabytes
+                OutputFiles.writeAtomically(json, OutputFiles.json(tree, in.model.members().size() <= COMPACT_JSON_ABOVE));
             } catch (IOException e) {
                 err.println(json + ": cannot write the results: " + e.getMessage());
                 return Main.INTERNAL;

@@ -62,7 +62,13 @@ public final class OutputFiles {
 
     /** The tree as indented JSON text (maps keep their order). */
     public static byte[] json(Map<String, Object> tree) throws IOException {
-        ObjectMapper m = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+        return json(tree, true);
+    }
+
+    /** The tree as JSON text, indented for reading or compact (large results). */
+    public static byte[] json(Map<String, Object> tree, boolean indent) throws IOException {
+        ObjectMapper m = new ObjectMapper();
+        if (indent) m.enable(SerializationFeature.INDENT_OUTPUT);
         return m.writeValueAsBytes(tree);
     }
 
