@@ -51,34 +51,7 @@ public final class SkylineLdl {
 
     /** Factors in place; returns false (and remembers where) if a pivot vanishes. */
     public boolean factor() {
-        for (int j = 0; j < n; j++) {
-            int mj = first[j], sj = start[j];
-            double original = a[sj + j - mj];
-            for (int i = mj + 1; i < j; i++) {
-                int mi = first[i], si = start[i];
-                int m = Math.max(mi, mj);
-                double s = 0;
-                for (int r = m; r < i; r++) s += a[si + r - mi] * a[sj + r - mj];
-                a[sj + i - mj] -= s;
-            }
-            double d = original;
-            for (int i = mj; i < j; i++) {
-                double g = a[sj + i - mj];
-                double l = g / a[start[i] + i - first[i]];
-                a[sj + i - mj] = l;
-                d -= g * l;
-            }
-            if (!(d > PIVOT_TOLERANCE * Math.abs(original)) || !(original > 0)) {
-                singularAt = j;
-                return false;
-            }
-            if (d / original < smallestPivotRatio) {
-                smallestPivotRatio = d / original;
-                smallestPivotAt = j;
-            }
-            a[sj + j - mj] = d;
-        }
-        return true;
+        return eliminate(PIVOT_TOLERANCE, null);
     }
 
     /**
@@ -89,6 +62,17 @@ public final class SkylineLdl {
      */
     public int[] factorSemidefinite(double relativeTolerance) {
         java.util.List<Integer> zeros = new java.util.ArrayList<>();
+        eliminate(relativeTolerance, zeros);
+        zeroPivots = zeros.stream().mapToInt(Integer::intValue).toArray();
+        return zeroPivots.clone();
+    }
+
+    /**
+     * The active-column L D L^T. A pivot below {@code tol} of its original diagonal stops a
+     * definite factorization (returns false), or, when {@code zeros} collects them, is
+     * recorded and dropped (later columns take nothing from its row).
+     */
+    private boolean eliminate(double tol, java.util.List<Integer> zeros) {
         for (int j = 0; j < n; j++) {
             int mj = first[j], sj = start[j];
             double original = a[sj + j - mj];
@@ -106,14 +90,20 @@ public final class SkylineLdl {
                 a[sj + i - mj] = l;
                 d -= g * l;
             }
-            if (!(d > relativeTolerance * Math.abs(original))) {
+            if (!(d > tol * Math.abs(original)) || !(original > 0)) {
+                if (zeros == null) {
+                    singularAt = j;
+                    return false;
+                }
                 zeros.add(j);
-                d = Double.POSITIVE_INFINITY; // later columns take nothing from this row
+                d = Double.POSITIVE_INFINITY;
+            } else if (d / original < smallestPivotRatio) {
+                smallestPivotRatio = d / original;
+                smallestPivotAt = j;
             }
             a[sj + j - mj] = d;
         }
-        zeroPivots = zeros.stream().mapToInt(Integer::intValue).toArray();
-        return zeroPivots.clone();
+        return true;
     }
 
     private int[] zeroPivots = new int[0];

@@ -99,19 +99,9 @@ public final class ResultsTree {
         o.put("factors", new LinkedHashMap<>(set.factors()));
         o.put("origin", set.origin());
         o.put("pattern_envelope", r.patterned());
-        Map<String, Object> reac = new LinkedHashMap<>(), reacRange = new LinkedHashMap<>();
-        Dimension[] rd = {Dimension.FORCE, Dimension.FORCE, Dimension.MOMENT};
-        String[] rn = {"Fx", "Fy", "Mz"};
-        for (String node : rep.reactions().keySet()) {
-            Map<String, Object> one = new LinkedHashMap<>(), range = new LinkedHashMap<>();
-            for (int c = 0; c < 3; c++) {
-                double hi = r.reaction(node, c, true), lo = r.reaction(node, c, false);
-                one.put(rn[c], out(u, Math.abs(lo) > Math.abs(hi) ? lo : hi, rd[c]));
-                range.put(rn[c], map("min", out(u, lo, rd[c]), "max", out(u, hi, rd[c])));
-            }
-            reac.put(node, one);
-            reacRange.put(node, range);
-        }
+        Map<String, Object> reacRange = new LinkedHashMap<>();
+        Map<String, Object> reac = triples(u, rep.reactions().keySet(), new String[]{"Fx", "Fy", "Mz"},
+                new Dimension[]{Dimension.FORCE, Dimension.FORCE, Dimension.MOMENT}, r::reaction, reacRange);
         o.put("reactions", reac);
         Map<String, Object> mem = new LinkedHashMap<>();
         for (String name : rep.members().keySet()) {
@@ -130,23 +120,38 @@ public final class ResultsTree {
             mem.put(name, p);
         }
         o.put("members", mem);
-        Map<String, Object> disp = new LinkedHashMap<>(), dispRange = new LinkedHashMap<>();
-        Dimension[] dd = {Dimension.LENGTH, Dimension.LENGTH, Dimension.NONE};
-        String[] dn = {"ux", "uy", "rz"};
-        for (String node : rep.displacements().keySet()) {
-            Map<String, Object> one = new LinkedHashMap<>(), range = new LinkedHashMap<>();
-            for (int c = 0; c < 3; c++) {
-                double hi = r.displacement(node, c, true), lo = r.displacement(node, c, false);
-                one.put(dn[c], out(u, Math.abs(lo) > Math.abs(hi) ? lo : hi, dd[c]));
-                range.put(dn[c], map("min", out(u, lo, dd[c]), "max", out(u, hi, dd[c])));
-            }
-            disp.put(node, one);
-            dispRange.put(node, range);
-        }
+        Map<String, Object> dispRange = new LinkedHashMap<>();
+        Map<String, Object> disp = triples(u, rep.displacements().keySet(), new String[]{"ux", "uy", "rz"},
+                new Dimension[]{Dimension.LENGTH, Dimension.LENGTH, Dimension.NONE}, r::displacement, dispRange);
         o.put("displacements", disp);
         if (r.patterned()) o.put("envelope", map("reactions", reacRange, "displacements", dispRange));
         o.put("equilibrium", map("residual", num(r.equilibriumResidual())));
         return o;
+    }
+
+    /** A value by node, component and bound: a reaction or a displacement of a load set. */
+    interface Bounded {
+        double value(String node, int component, boolean upper);
+    }
+
+    /**
+     * Three components per node: the bound of larger magnitude under its key, both bounds
+     * into {@code ranges} (they coincide unless the set is a pattern envelope).
+     */
+    static Map<String, Object> triples(UnitSystem u, java.util.Collection<String> nodes, String[] keys, Dimension[] dims,
+                                       Bounded value, Map<String, Object> ranges) {
+        Map<String, Object> out = new LinkedHashMap<>();
+        for (String node : nodes) {
+            Map<String, Object> one = new LinkedHashMap<>(), range = new LinkedHashMap<>();
+            for (int c = 0; c < 3; c++) {
+                double hi = value.value(node, c, true), lo = value.value(node, c, false);
+                one.put(keys[c], out(u, Math.abs(lo) > Math.abs(hi) ? lo : hi, dims[c]));
+                range.put(keys[c], map("min", out(u, lo, dims[c]), "max", out(u, hi, dims[c])));
+            }
+            out.put(node, one);
+            ranges.put(node, range);
+        }
+        return out;
     }
 
     static Map<String, Object> claim(UnitSystem u, ClaimResult r) {
