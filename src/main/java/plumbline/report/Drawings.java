@@ -366,6 +366,23 @@ public final class Drawings {
         }
     }
 
+    /**
+     * True when a diagram would show nothing: the function is zero on every member (shear
+     * and moment in a truss under joint loads), to rounding of the largest force in play.
+     */
+    public static boolean blank(Model m, Solution s, Kind kind) {
+        if (kind == Kind.DEFLECTION) return false;
+        double force = 0, peak = 0;
+        for (double[] r : s.reactions().values()) force = Math.max(force, Math.hypot(r[0], r[1]));
+        for (MemberSolution ms : s.members().values()) {
+            force = Math.max(force, Math.max(ms.peaks().value("N_abs"), ms.peaks().value("V_abs")));
+            Piecewise p = function(ms, kind);
+            peak = Math.max(peak, Math.max(Math.abs(p.max().value()), Math.abs(p.min().value())));
+        }
+        double scale = kind == Kind.MOMENT ? force * m.extentM() : force;
+        return peak <= 1e-9 * scale;
+    }
+
     private static double maxDisplacement(Solution s) {
         double d = 0;
         for (double[] u : s.displacements().values()) d = Math.max(d, Math.hypot(u[0], u[1]));

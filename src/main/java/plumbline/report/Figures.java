@@ -38,6 +38,7 @@ public final class Figures {
             for (String name : sets) {
                 Solution s = a.solutions().get(a.primaryEngine()).get(name).representative();
                 for (Drawings.Kind kind : Drawings.Kind.values()) {
+                    if (Drawings.blank(m, s, kind)) continue;
                     out.put(safe(name) + "-" + kind.name().toLowerCase(java.util.Locale.ROOT) + ".png",
                             png(499, 150, g -> Drawings.diagram(g, m, s, kind, 499, 150)));
                 }

@@ -523,7 +523,7 @@ public final class PdfReport {
             Solution s = r.representative();
             para(doc, "Load set " + name + (r.patterned() ? " (every patterned load on; tabulated peaks are the envelope's)" : ""), bold);
             for (Drawings.Kind k : Drawings.Kind.values()) {
-                if (k == Drawings.Kind.AXIAL && s.members().values().stream().allMatch(x -> x.peaks().value("N_abs") == 0)) continue;
+                if (Drawings.blank(m, s, k)) continue; // e.g. shear and moment of a truss under joint loads
                 // caption and picture kept on one page
                 PdfPTable box = new PdfPTable(1);
                 box.setWidthPercentage(100);
