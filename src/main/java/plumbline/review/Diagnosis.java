@@ -126,6 +126,24 @@ final class Diagnosis {
                         + "combination", what, c.combo(), fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
             }
         }
+        // allowable-stress (service) level against a strength combination: the ASCE 7 ASD
+        // combinations, formed here from the solved load cases even when the model does not list them
+        LoadSet own = a.loadSets().stream().filter(x -> x.name().equals(c.combo())).findFirst().orElse(null);
+        if (own != null && own.origin().startsWith("ASCE/SEI 7-16 section 2.3.1") && !a.model().standardCombinations().contains("asce7-asd")) {
+            Model asd = new Model(m.file(), m.job(), m.units(), m.materials(), m.sections(), m.nodes(), m.supports(), m.members(),
+                    m.loadCases(), List.of(), List.of("asce7-asd"), m.redundants(), List.of());
+            plumbline.solve.EngineResult er = a.engines().get(engine);
+            for (LoadSet s : StandardCombinations.expand(asd)) {
+                if (s.factors().keySet().stream().anyMatch(k -> m.loadCase(k).pattern())) continue;
+                Map<plumbline.solve.Solution, Double> parts = new LinkedHashMap<>();
+                for (var f : s.factors().entrySet()) parts.put(er.cases().get(f.getKey()), f.getValue());
+                plumbline.solve.Solution sol = plumbline.solve.Superposition.combine(a.engineModel(), s.name(), parts);
+                double v = Review.of(new LoadSetResult.Plain(sol), c).value();
+                hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the allowable-stress combination %s "
+                        + "(%s %s): ASD (service-level) loads against a strength combination", what, s.name(),
+                        fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
+            }
+        }
         if (here != null && here.patterned()) {
             double v = Review.of(new LoadSetResult.Plain(here.representative()), c).value();
             hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with every span loaded (%s %s): "
