@@ -48,6 +48,7 @@ public final class ResultsTree {
             for (LoadSet s : a.loadSets()) combos.put(s.name(), solution(m, s, sols.get(s.name())));
         }
         root.put("combinations", combos);
+        if (sols != null) root.put("envelope", envelope(m, a, sols));
         root.put("engine", engineShown);
         Map<String, Object> engines = new LinkedHashMap<>();
         a.engines().forEach((k, v) -> engines.put(k, map("stable", v.stable(), "instability", v.instability(), "notes", v.notes())));
@@ -127,6 +128,62 @@ public final class ResultsTree {
         if (r.patterned()) o.put("envelope", map("reactions", reacRange, "displacements", dispRange));
         o.put("equilibrium", map("residual", num(r.equilibriumResidual())));
         return o;
+    }
+
+    /**
+     * The envelope over all combinations (not the bare load cases): for every member peak
+     * and every reaction component its most severe value and the combination that governs.
+     */
+    static Map<String, Object> envelope(Model m, Analysis a, Map<String, LoadSetResult> sols) {
+        UnitSystem u = m.units();
+        List<LoadSet> combos = a.loadSets().stream().filter(LoadSet::combination).toList();
+        Map<String, Object> out = new LinkedHashMap<>();
+        out.put("combinations", combos.stream().map(LoadSet::name).toList());
+        if (combos.isEmpty()) return out;
+        Map<String, Object> members = new LinkedHashMap<>();
+        for (String mem : m.members().keySet()) {
+            Map<String, Object> one = new LinkedHashMap<>();
+            for (String q : PEAKS) {
+                double best = Double.NaN;
+                String gov = null;
+                for (LoadSet s : combos) {
+                    double v = sols.get(s.name()).peak(mem, q).value();
+                    boolean better = Double.isNaN(best) || (q.endsWith("_min") ? v < best : v > best);
+                    if (better) {
+                        best = v;
+                        gov = s.name();
+                    }
+                }
+                one.put(q, map("value", out(u, best, plumbline.io.ClaimsReader.dimensionOf(Claim.Kind.MEMBER, q)), "governing", gov));
+            }
+            members.put(mem, one);
+        }
+        out.put("members", members);
+        Map<String, Object> reactions = new LinkedHashMap<>();
+        String[] keys = {"Fx", "Fy", "Mz"};
+        Dimension[] dims = {Dimension.FORCE, Dimension.FORCE, Dimension.MOMENT};
+        for (String node : m.supports().keySet()) {
+            Map<String, Object> one = new LinkedHashMap<>();
+            for (int c = 0; c < 3; c++) {
+                double hi = Double.NEGATIVE_INFINITY, lo = Double.POSITIVE_INFINITY;
+                String gHi = null, gLo = null;
+                for (LoadSet s : combos) {
+                    double h = sols.get(s.name()).reaction(node, c, true), l = sols.get(s.name()).reaction(node, c, false);
+                    if (h > hi) {
+                        hi = h;
+                        gHi = s.name();
+                    }
+                    if (l < lo) {
+                        lo = l;
+                        gLo = s.name();
+                    }
+                }
+                one.put(keys[c], map("max", out(u, hi, dims[c]), "max_governing", gHi, "min", out(u, lo, dims[c]), "min_governing", gLo));
+            }
+            reactions.put(node, one);
+        }
+        out.put("reactions", reactions);
+        return out;
     }
 
     /** A value by node, component and bound: a reaction or a displacement of a load set. */

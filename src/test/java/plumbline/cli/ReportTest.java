@@ -34,6 +34,7 @@ class ReportTest {
             "footbridge-truss.yaml, footbridge-truss-claims.yaml",
             "three-span-beam.yaml, three-span-beam-claims.csv",
             "portal-frame.yaml, portal-frame-claims.yaml",
+            "office-floor-beam.yaml, office-floor-beam-claims.yaml",
             "../checks/20-two-span-pattern-live.yaml, ",
     })
     void pdfAndJsonAgree(String model, String claims) throws Exception {

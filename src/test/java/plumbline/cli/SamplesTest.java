@@ -19,6 +19,7 @@ class SamplesTest {
             "footbridge-truss.yaml, footbridge-truss-claims.yaml, M-D1-ULS-N_max",
             "three-span-beam.yaml, three-span-beam-claims.csv, R-A-SLS-Fy",
             "portal-frame.yaml, portal-frame-claims.yaml, R-E-ULS-W-Fx",
+            "office-floor-beam.yaml, office-floor-beam-claims.yaml, M-S2-asce7-strength/2-M_max",
     })
     @SuppressWarnings("unchecked")
     void sampleRuns(String model, String claims, String slip) throws Exception {
