@@ -400,7 +400,9 @@ public final class PdfReport {
     private void comparison(Document doc, Model m) throws DocumentException {
         heading(doc, "4  Claims compared");
         para(doc, "Each claim against the stiffness-method and force-method values. Difference relative to the computed "
-                + "value; the tolerance and where it comes from are given per claim. Rows marked !! are mismatches, ? marginal.", body);
+                + "value; the tolerance and where it comes from are given per claim: (default) reactions 3%, member forces 5%, "
+                + "deflections 10% (common practice), (file) set in the claims file, (claim) set on the claim, (--tolerance) "
+                + "set by the checker. Rows marked !! are mismatches, ? marginal.", body);
         UnitSystem u = m.units();
         Set<String> combos = new LinkedHashSet<>();
         for (ClaimResult c : review.claims()) combos.add(c.claim().combo());
@@ -427,13 +429,21 @@ public final class PdfReport {
                 t.addCell(cell(value(u, c.computed(), c.claim().dimension()), f, shade));
                 t.addCell(cell(Double.isFinite(c.computedForce()) ? value(u, c.computedForce(), c.claim().dimension()) : "not run", f, shade));
                 t.addCell(cell(Console.pct(c.relativeDifference()), f, shade));
-                t.addCell(cell(Console.pct(c.tolerance().relative()) + " (" + c.tolerance().why() + ")", small, shade));
+                t.addCell(cell(Console.pct(c.tolerance().relative()) + " " + shortWhy(c.tolerance().why()), small, shade));
                 t.addCell(cell(c.status().word.toUpperCase(Locale.ROOT), f, shade));
                 String gov = c.claim().combo().equals("envelope") || c.governing().contains(" with loads on ") ? "governs: " + c.governing() : "";
                 t.addCell(cell(c.diagnosis() != null ? c.diagnosis() : gov, small, shade));
             }
             doc.add(t);
         }
+    }
+
+    /** Where a tolerance came from, in a word for the table (the JSON keeps the full reason). */
+    static String shortWhy(String why) {
+        if (why.startsWith("default")) return "(default)";
+        if (why.startsWith("claims file")) return "(file)";
+        if (why.startsWith("set on")) return "(claim)";
+        return "(" + why + ")";
     }
 
     static String factors(LoadSet s) {
