@@ -52,6 +52,8 @@ final class BenchCommand implements Callable<Integer> {
         };
     }
 
+    private String forceNote;
+
     @Override
     public Integer call() throws Exception {
         var out = spec.commandLine().getOut();
@@ -79,8 +81,9 @@ final class BenchCommand implements Callable<Integer> {
                 double force = Double.NaN;
                 if (ForceEngine.tooLarge(m) == null) {
                     long f0 = System.nanoTime();
-                    new ForceEngine().solve(m);
-                    force = (System.nanoTime() - f0) / 1e9;
+                    EngineResult f = new ForceEngine().solve(m);
+                    if (f.stable()) force = (System.nanoTime() - f0) / 1e9;
+                    else forceNote = f.instability();
                 }
                 long t4 = System.nanoTime();
                 boolean both = ForceEngine.tooLarge(m) == null;
@@ -96,9 +99,10 @@ final class BenchCommand implements Callable<Integer> {
                 heap = Math.max(heap, peakHeap());
             }
             out.printf(Locale.ROOT, "%8d %7.3f %7.3f %7.3f %7s %9.3f %7d%n", members, best[0], best[1], best[2],
-                    best[3] >= 1e9 ? "skipped" : String.format(Locale.ROOT, "%.3f", best[3]), best[4], heap >> 20);
+                    best[3] >= 1e9 ? "not run" : String.format(Locale.ROOT, "%.3f", best[3]), best[4], heap >> 20);
         }
-        out.println("force: skipped above " + ForceEngine.MAX_EQUATIONS + " node equations (dense formulation)");
+        out.println("force: dense up to " + ForceEngine.DENSE_LIMIT + " node equations, then closed-ring self-stress states (sparse)");
+        if (forceNote != null) out.println("force not run on some sizes: " + forceNote);
         return Main.OK;
     }
 

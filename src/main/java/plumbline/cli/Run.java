@@ -70,9 +70,17 @@ final class Run {
         if (method.equals("both") && tooLarge != null) {
             notes.add("force method not run: " + tooLarge + "; the results are the stiffness method's alone, unconfirmed by a second method");
         }
+        if (!a.engines().isEmpty() && a.solutions().isEmpty() && a.stable()) {
+            for (var e : a.engines().values()) err.println("plumbline: " + e.engine() + " method not run: " + e.instability());
+            err.println("plumbline: no requested method solved this model; nothing was written (try --method stiffness)");
+            return Main.INTERNAL;
+        }
         Review r = Review.of(a, new TolerancePolicy(tolerance), new StiffnessEngine());
         String shown = a.primaryEngine();
         Double agreement = null;
+        for (var e : a.engines().values()) {
+            if (e.declined()) notes.add(e.engine() + " method not run: " + e.instability() + "; the results are the other method's alone");
+        }
         if (a.solutions().containsKey("stiffness") && a.solutions().containsKey("force")) {
             agreement = plumbline.review.Agreement.maxRelativeDifference(in.model, a.engines().get("stiffness").cases(),
                     a.engines().get("force").cases());

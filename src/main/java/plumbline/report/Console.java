@@ -52,7 +52,8 @@ public final class Console {
                 + m.loadCases().size() + " load cases, " + m.combinations().size() + (m.combinations().size() == 1 ? " combination)" : " combinations)"), "  "));
         sb.append(determinacy(r.analysis().determinacy()));
         r.analysis().engines().forEach((k, v) -> {
-            if (!v.stable()) sb.append(wrap(k + " method: " + v.instability(), "  "));
+            if (v.declined()) sb.append(wrap(k + " method not run: " + v.instability(), "  "));
+            else if (!v.stable()) sb.append(wrap(k + " method: " + v.instability(), "  "));
         });
         if (r.analysis().stable()) {
             double worst = 0;

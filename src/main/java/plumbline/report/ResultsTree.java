@@ -51,7 +51,7 @@ public final class ResultsTree {
         if (sols != null) root.put("envelope", envelope(m, a, sols));
         root.put("engine", engineShown);
         Map<String, Object> engines = new LinkedHashMap<>();
-        a.engines().forEach((k, v) -> engines.put(k, map("stable", v.stable(), "instability", v.instability(), "notes", v.notes())));
+        a.engines().forEach((k, v) -> engines.put(k, map("stable", v.stable(), "declined", v.declined(), "instability", v.instability(), "notes", v.notes())));
         root.put("engines", engines);
         root.put("agreement", agreement == null ? null : map("max_relative_difference", num(agreement)));
         List<Object> claims = new ArrayList<>();

@@ -106,7 +106,7 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
 
     public boolean stable() {
         return determinacy.classification() != Determinacy.Classification.UNSTABLE
-                && engines.values().stream().allMatch(EngineResult::stable);
+                && engines.values().stream().allMatch(e -> e.stable() || e.declined());
     }
 
     /** The engine whose numbers are reported first: stiffness when it ran, else the first. */

@@ -6,10 +6,15 @@ import java.util.Map;
 /**
  * What an engine returns for a model: the solution of every load case, unfactored, or,
  * when the engine finds the structure cannot carry load, why (singularity is a state, not
- * an exception). {@code notes} carry engine-specific remarks for the report.
+ * an exception). {@code notes} carry engine-specific remarks for the report; {@code declined}
+ * marks an engine that did not take the model on, which is not instability.
  */
 public record EngineResult(String engine, boolean stable, String instability, Map<String, Solution> cases,
-                           List<String> notes) {
+                           List<String> notes, boolean declined) {
+
+    public EngineResult(String engine, boolean stable, String instability, Map<String, Solution> cases, List<String> notes) {
+        this(engine, stable, instability, cases, notes, false);
+    }
 
     public EngineResult {
         cases = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(cases));
@@ -17,6 +22,14 @@ public record EngineResult(String engine, boolean stable, String instability, Ma
     }
 
     public static EngineResult unstable(String engine, String why) {
-        return new EngineResult(engine, false, why, Map.of(), List.of());
+        return new EngineResult(engine, false, why, Map.of(), List.of(), false);
+    }
+
+    /**
+     * The engine did not solve this model for a reason of its own (size, a formulation that
+     * does not apply), which says nothing about the structure's stability.
+     */
+    public static EngineResult declined(String engine, String why) {
+        return new EngineResult(engine, false, why, Map.of(), List.of(), true);
     }
 }

@@ -64,6 +64,16 @@ final class Flexibility {
         return a == b ? len / (3 * ei) : -len / (6 * ei);
     }
 
+    /** The unknowns that share unknown j's flexibility block (its member's, or j alone). */
+    int[] group(int j) {
+        return group[j];
+    }
+
+    /** Entry (j, group(j)[b]) of the flexibility. */
+    double coefficient(int j, int b) {
+        return block[j][b];
+    }
+
     /** F v for a vector of unknowns. */
     double[] times(double[] v) {
         double[] out = new double[v.length];

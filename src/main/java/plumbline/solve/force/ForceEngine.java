@@ -57,15 +57,28 @@ public final class ForceEngine implements Engine {
      * structure, LU of the primary equilibrium matrix): cost grows as the cube of the
      * number of node equations. Above this many it is not run.
      */
-    public static final int MAX_EQUATIONS = 1100;
+    public static final int DENSE_LIMIT = 1100;
+    /** When the sparse path declines, the dense one is still tried up to this many equations (some seconds). */
+    public static final int DENSE_FALLBACK_LIMIT = 1600;
+    /** Above this many node equations even the sparse path is not run (memory of its ring states). */
+    public static final int MAX_EQUATIONS = 200_000;
 
     /** Why the model is too large for this engine, or null when it is not. */
     public static String tooLarge(Model model) {
+        int m = equations(model);
+        return m > MAX_EQUATIONS ? "the model has " + m + " node equations; the force method takes at most " + MAX_EQUATIONS : null;
+    }
+
+    static int equations(Model model) {
         int m = 0;
         java.util.Set<String> rot = model.rotationalNodes();
         for (String n : model.nodes().keySet()) m += rot.contains(n) ? 3 : 2;
-        return m > MAX_EQUATIONS ? "the model has " + m + " node equations; the dense force method takes at most "
-                + MAX_EQUATIONS : null;
+        return m;
+    }
+
+    /** The sparse path (closed-ring self-stress states) whatever the size, for tests. */
+    public static EngineResult solveSparse(Model model) {
+        return SparseForceMethod.solve(model, EquilibriumMatrix.of(model), "force");
     }
 
     @Override
@@ -76,6 +89,10 @@ public final class ForceEngine implements Engine {
     @Override
     public EngineResult solve(Model model) {
         EquilibriumMatrix eq = EquilibriumMatrix.of(model);
+        if (eq.equations().size() > DENSE_LIMIT && model.redundants().isEmpty()) {
+            EngineResult sparse = SparseForceMethod.solve(model, eq, name());
+            if (!sparse.declined() || eq.equations().size() > DENSE_FALLBACK_LIMIT) return sparse;
+        }
         int m = eq.equations().size(), n = eq.unknowns().size();
         double lc = eq.lengthScale();
         List<EquilibriumMatrix.Unknown> unk = eq.unknowns();
@@ -194,20 +211,8 @@ public final class ForceEngine implements Engine {
         else if (r > 0) notes.add("flexibility coefficients: a " + r + " x " + r + " matrix (listed for up to " + WORKING_SHOWN + " redundants)");
         for (LoadCase c : model.loadCases()) {
             Map<String, MemberActions> actions = MemberActions.of(model, c);
-            double[] p = new double[m];
-            for (NodeLoad nl : c.nodeLoads()) {
-                p[row.get(nl.node() + "/0")] += nl.fxN();
-                p[row.get(nl.node() + "/1")] += nl.fyN();
-                Integer rz = row.get(nl.node() + "/2");
-                if (rz != null) p[rz] += nl.mzNm();
-            }
             Map<String, double[]> particular = new HashMap<>();
-            for (var ae : actions.entrySet()) {
-                Member mem = model.member(ae.getKey());
-                double[] fp = released(ae.getValue());
-                particular.put(mem.name(), fp);
-                addToNodes(model, mem, fp, p, row);
-            }
+            double[] p = nodeLoads(model, c, actions, row, m, particular);
             double[] rhs = new double[m];
             for (int i = 0; i < m; i++) rhs[i] = -p[i];
             double[] xb = primary.solve(new org.apache.commons.math3.linear.ArrayRealVector(rhs, false)).toArray();
@@ -265,6 +270,29 @@ public final class ForceEngine implements Engine {
         return new double[]{fxi, fyi, 0, fxj, fyj, 0};
     }
 
+    /**
+     * The loads on the node equations of case c: node loads, plus what each member's loads put
+     * on its nodes when it is released to a simple beam; the released end forces go into
+     * {@code particular}.
+     */
+    static double[] nodeLoads(Model model, LoadCase c, Map<String, MemberActions> actions, Map<String, Integer> row, int m,
+                              Map<String, double[]> particular) {
+        double[] p = new double[m];
+        for (NodeLoad nl : c.nodeLoads()) {
+            p[row.get(nl.node() + "/0")] += nl.fxN();
+            p[row.get(nl.node() + "/1")] += nl.fyN();
+            Integer rz = row.get(nl.node() + "/2");
+            if (rz != null) p[rz] += nl.mzNm();
+        }
+        for (var ae : actions.entrySet()) {
+            Member mem = model.member(ae.getKey());
+            double[] fp = released(ae.getValue());
+            particular.put(mem.name(), fp);
+            addToNodes(model, mem, fp, p, row);
+        }
+        return p;
+    }
+
     private static void addToNodes(Model model, Member mem, double[] f, double[] p, Map<String, Integer> row) {
         double[] dir = MemberActions.direction(model, mem);
         double cx = dir[0], cy = dir[1];
@@ -275,7 +303,7 @@ public final class ForceEngine implements Engine {
         p[row.get(mem.to() + "/1")] -= f[3] * cy + f[4] * cx;
     }
 
-    private static double[] settlements(Model model, EquilibriumMatrix eq, LoadCase c) {
+    static double[] settlements(Model model, EquilibriumMatrix eq, LoadCase c) {
         double[] d = new double[eq.unknowns().size()];
         for (Settlement s : c.settlements()) {
             for (int j = 0; j < d.length; j++) {
@@ -288,7 +316,7 @@ public final class ForceEngine implements Engine {
         return d;
     }
 
-    private static Solution assemble(Model model, EquilibriumMatrix eq, LoadCase c, Map<String, MemberActions> actions,
+    static Solution assemble(Model model, EquilibriumMatrix eq, LoadCase c, Map<String, MemberActions> actions,
                                      Map<String, double[]> particular, double[] xs, double[] u, Map<String, Integer> row) {
         Map<String, double[]> disp = new LinkedHashMap<>();
         for (Node nd : model.nodes().values()) {

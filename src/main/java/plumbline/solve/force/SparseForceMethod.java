@@ -1,0 +1,429 @@
+package plumbline.solve.force;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.linear.SingularValueDecomposition;
+import plumbline.linalg.NodeOrdering;
+import plumbline.linalg.SkylineLdl;
+import plumbline.model.LoadCase;
+import plumbline.model.Member;
+import plumbline.model.Model;
+import plumbline.model.Node;
+import plumbline.model.Support;
+import plumbline.solve.EngineResult;
+import plumbline.solve.MemberActions;
+import plumbline.solve.Solution;
+import plumbline.statics.EquilibriumMatrix;
+
+/**
+ * The force method for large models, kept sparse by choosing local self-stress states: the
+ * closed rings of the structure, read as the bounded faces of its plane drawing with the
+ * ground as one more vertex (a ring through the ground runs between two supports). Each
+ * ring's own equilibrium equations give its self-stress states (the null space of a small
+ * matrix), which involve only the ring's members and reactions. The compatibility
+ * equations (X^T F X) z = -X^T (F x0 + e - d) are then sparse and banded and are solved by
+ * a skyline L D L^T; the particular solution x0 and the node displacements (from the
+ * compatible deformations, A^T u = -(F x + e - d), the virtual-work statement for A x = -p) come from the normal equations A A^T of the
+ * equilibrium matrix with iterative refinement. The same physics as the dense path; the
+ * states are counted against the degree of indeterminacy, and when the rings do not supply
+ * exactly that many independent states (a drawing with crossing members, releases that
+ * make a ring a mechanism) the method declines and says so.
+ */
+final class SparseForceMethod {
+
+    /** Singular values of a ring's scaled equilibrium matrix below this fraction of the largest are zero. */
+    static final double RING_NULL_TOLERANCE = 1e-10;
+    /** Rings of more members than this are not analysed (their local null space is a dense SVD). */
+    static final int LONGEST_RING = 200;
+    /** Refinement steps after each normal-equation solve (each gains about the digits the squaring cost). */
+    static final int REFINEMENTS = 3;
+
+    private final Model model;
+    private final EquilibriumMatrix eq;
+    private final int m, n;
+    private final double[] rowScale, colScale;
+    private final int[][] colRows;
+    private final double[][] colVals;   // scaled A_s = R A C by columns
+    private final int[] pos;            // equation -> position in the normal-equation ordering
+    private SkylineLdl normal;
+
+    private SparseForceMethod(Model model, EquilibriumMatrix eq) {
+        this.model = model;
+        this.eq = eq;
+        m = eq.equations().size();
+        n = eq.unknowns().size();
+        double lc = eq.lengthScale();
+        rowScale = new double[m];
+        for (int i = 0; i < m; i++) rowScale[i] = eq.equations().get(i).direction() == 2 ? 1 / lc : 1;
+        colScale = new double[n];
+        colRows = new int[n][];
+        colVals = new double[n][];
+        for (int j = 0; j < n; j++) {
+            EquilibriumMatrix.Unknown u = eq.unknowns().get(j);
+            boolean moment = u.kind() == EquilibriumMatrix.Kind.MOMENT_START || u.kind() == EquilibriumMatrix.Kind.MOMENT_END
+                    || (u.kind() == EquilibriumMatrix.Kind.REACTION && u.direction() == 2);
+            colScale[j] = moment ? lc : 1;
+            colRows[j] = eq.columnRows(j);
+            double[] v = eq.columnValues(j);
+            for (int k = 0; k < v.length; k++) v[k] *= rowScale[colRows[j][k]] * colScale[j];
+            colVals[j] = v;
+        }
+        pos = equationOrder();
+    }
+
+    /** Solves the model, or returns a result whose instability says why this method declined. */
+    static EngineResult solve(Model model, EquilibriumMatrix eq, String engine) {
+        SparseForceMethod s = new SparseForceMethod(model, eq);
+        return s.run(engine);
+    }
+
+    private int[] equationOrder() {
+        List<String> names = new ArrayList<>(model.nodes().keySet());
+        Map<String, Integer> index = new HashMap<>();
+        for (int k = 0; k < names.size(); k++) index.put(names.get(k), k);
+        List<int[]> edges = new ArrayList<>();
+        for (Member mem : model.members().values()) edges.add(new int[]{index.get(mem.from()), index.get(mem.to())});
+        int[] order = NodeOrdering.reverseCuthillMcKee(names.size(), edges);
+        int[] rank = new int[names.size()];
+        for (int k = 0; k < order.length; k++) rank[order[k]] = k;
+        Integer[] eqs = new Integer[m];
+        for (int i = 0; i < m; i++) eqs[i] = i;
+        Arrays.sort(eqs, (p, q) -> {
+            int a = rank[index.get(eq.equations().get(p).node())], b = rank[index.get(eq.equations().get(q).node())];
+            return a != b ? Integer.compare(a, b) : Integer.compare(p, q);
+        });
+        int[] out = new int[m];
+        for (int k = 0; k < m; k++) out[eqs[k]] = k;
+        return out;
+    }
+
+    private EngineResult run(String engine) {
+        // normal equations A_s A_s^T (positive definite for a stable model)
+        int[] first = new int[m];
+        for (int i = 0; i < m; i++) first[i] = i;
+        for (int j = 0; j < n; j++) {
+            int min = Integer.MAX_VALUE;
+            for (int i : colRows[j]) min = Math.min(min, pos[i]);
+            for (int i : colRows[j]) first[pos[i]] = Math.min(first[pos[i]], min);
+        }
+        normal = new SkylineLdl(first);
+        for (int j = 0; j < n; j++) {
+            for (int p = 0; p < colRows[j].length; p++) {
+                for (int q = 0; q < colRows[j].length; q++) {
+                    int a = pos[colRows[j][p]], b = pos[colRows[j][q]];
+                    if (a <= b) normal.add(a, b, colVals[j][p] * colVals[j][q]);
+                }
+            }
+        }
+        if (!normal.factor()) return EngineResult.unstable(engine, "the equilibrium equations are singular: no statically admissible state");
+        // local self-stress states from the rings
+        List<int[]> faces = faces();
+        if (faces == null) {
+            return EngineResult.declined(engine, "the sparse force method needs a plane drawing without crossing members; "
+                    + "this model has crossings, so its rings cannot be read from the drawing");
+        }
+        // rings smallest first; the long ones (a chord between two supports) only while states are still missing
+        int degree = n - m;
+        faces.sort(java.util.Comparator.comparingInt(f -> f.length));
+        List<Map<Integer, Double>> states = new ArrayList<>();
+        for (int[] face : faces) {
+            if (states.size() >= degree) break;
+            if (face.length > LONGEST_RING) {
+                return EngineResult.declined(engine, "a closed ring of " + face.length + " members is needed for the "
+                        + "remaining self-stress states; the sparse force method takes rings of at most " + LONGEST_RING);
+            }
+            states.addAll(ringStates(face));
+        }
+        if (states.size() != degree) {
+            return EngineResult.declined(engine, "the rings of the drawing give " + states.size() + " self-stress states for a degree of "
+                    + degree + " (releases combine rings); the sparse force method declines this model");
+        }
+        Flexibility flex = Flexibility.of(model, eq);
+        int r = states.size();
+        // compatibility matrix delta = X^T F_s X, assembled block by block, in reverse Cuthill-McKee order of the states
+        Map<Integer, List<Integer>> statesAt = new HashMap<>();
+        for (int t = 0; t < r; t++) for (int j : states.get(t).keySet()) statesAt.computeIfAbsent(j, k -> new ArrayList<>()).add(t);
+        List<int[]> pairs = new ArrayList<>();
+        Map<Integer, List<Integer>> touching = new HashMap<>(); // flexibility block (first unknown) -> states
+        for (int j = 0; j < n; j++) {
+            int key = flex.group(j)[0];
+            List<Integer> st = statesAt.get(j);
+            if (st == null) continue;
+            List<Integer> l = touching.computeIfAbsent(key, k -> new ArrayList<>());
+            for (int t : st) if (!l.contains(t)) l.add(t);
+        }
+        for (List<Integer> l : touching.values()) for (int a : l) for (int b : l) if (a < b) pairs.add(new int[]{a, b});
+        int[] order = NodeOrdering.reverseCuthillMcKee(r, pairs);
+        int[] at = new int[r];
+        for (int k = 0; k < r; k++) at[order[k]] = k;
+        int[] dfirst = new int[r];
+        for (int t = 0; t < r; t++) dfirst[t] = t;
+        for (List<Integer> l : touching.values()) {
+            int min = Integer.MAX_VALUE;
+            for (int t : l) min = Math.min(min, at[t]);
+            for (int t : l) dfirst[at[t]] = Math.min(dfirst[at[t]], min);
+        }
+        SkylineLdl delta = new SkylineLdl(dfirst);
+        for (var e : touching.entrySet()) {
+            int[] group = flex.group(e.getKey());
+            for (int a : e.getValue()) {
+                for (int b : e.getValue()) {
+                    if (at[a] > at[b]) continue;
+                    double v = 0;
+                    for (int p = 0; p < group.length; p++) {
+                        double xa = states.get(a).getOrDefault(group[p], 0.0);
+                        if (xa == 0) continue;
+                        for (int q = 0; q < group.length; q++) {
+                            double xb = states.get(b).getOrDefault(group[q], 0.0);
+                            if (xb == 0) continue;
+                            v += xa * flex.coefficient(group[p], q) * colScale[group[p]] * colScale[group[q]] * xb;
+                        }
+                    }
+                    if (v != 0) delta.add(at[a], at[b], v);
+                }
+            }
+        }
+        if (!delta.factor()) {
+            return EngineResult.declined(engine, "the ring self-stress states are not independent; the sparse force method declines this model");
+        }
+        Map<String, Integer> row = new HashMap<>();
+        for (int i = 0; i < m; i++) row.put(eq.equations().get(i).node() + "/" + eq.equations().get(i).direction(), i);
+        Map<String, Solution> cases = new LinkedHashMap<>();
+        for (LoadCase c : model.loadCases()) {
+            Map<String, MemberActions> actions = MemberActions.of(model, c);
+            Map<String, double[]> particular = new HashMap<>();
+            double[] p = ForceEngine.nodeLoads(model, c, actions, row, m, particular);
+            double[] bs = new double[m];
+            for (int i = 0; i < m; i++) bs[i] = -p[i] * rowScale[i];
+            double[] xs = leastNorm(bs);
+            double[] x0 = new double[n];
+            for (int j = 0; j < n; j++) x0[j] = xs[j] * colScale[j];
+            double[] e0 = flex.initialDeformation(model, eq, actions, particular);
+            double[] d = ForceEngine.settlements(model, eq, c);
+            double[] f0 = flex.times(x0);
+            double[] gs = new double[n];
+            for (int j = 0; j < n; j++) gs[j] = (f0[j] + e0[j] - d[j]) * colScale[j];
+            double[] rhs = new double[r];
+            for (int t = 0; t < r; t++) {
+                double s = 0;
+                for (var en : states.get(t).entrySet()) s += en.getValue() * gs[en.getKey()];
+                rhs[at[t]] = -s;
+            }
+            double[] z = delta.solve(rhs);
+            double[] x = x0.clone();
+            for (int t = 0; t < r; t++) {
+                double zt = z[at[t]];
+                for (var en : states.get(t).entrySet()) x[en.getKey()] += zt * en.getValue() * colScale[en.getKey()];
+            }
+            double[] fx = flex.times(x);
+            double[] ws = new double[n];
+            // virtual work with A x_v = -p_v: the node displacements satisfy A^T u = -(F x + e - d)
+            for (int j = 0; j < n; j++) ws[j] = -(fx[j] + e0[j] - d[j]) * colScale[j];
+            double[] us = compatibleDisplacements(ws);
+            double[] u = new double[m];
+            for (int i = 0; i < m; i++) u[i] = us[i] * rowScale[i];
+            cases.put(c.name(), ForceEngine.assemble(model, eq, c, actions, particular, x, u, row));
+        }
+        List<String> notes = List.of("redundants: " + r + " self-stress states of the " + faces.size()
+                        + " closed rings (sparse force method; the working is not listed at this size)",
+                "flexibility matrix: " + r + " x " + r + ", " + delta.storedEntries() + " stored entries (skyline, RCM order)");
+        return new EngineResult(engine, true, null, cases, notes);
+    }
+
+    /** A_s x for unknowns x, by equation index. */
+    private double[] times(double[] x) {
+        double[] out = new double[m];
+        for (int j = 0; j < n; j++) {
+            if (x[j] == 0) continue;
+            for (int k = 0; k < colRows[j].length; k++) out[colRows[j][k]] += colVals[j][k] * x[j];
+        }
+        return out;
+    }
+
+    private double[] transposeTimes(double[] y) {
+        double[] out = new double[n];
+        for (int j = 0; j < n; j++) {
+            double s = 0;
+            for (int k = 0; k < colRows[j].length; k++) s += colVals[j][k] * y[colRows[j][k]];
+            out[j] = s;
+        }
+        return out;
+    }
+
+    private double[] normalSolve(double[] byEquation) {
+        double[] b = new double[m];
+        for (int i = 0; i < m; i++) b[pos[i]] = byEquation[i];
+        double[] y = normal.solve(b);
+        double[] out = new double[m];
+        for (int i = 0; i < m; i++) out[i] = y[pos[i]];
+        return out;
+    }
+
+    /** The least-norm x with A_s x = b (exact for the square-or-wide A_s of a stable model), refined. */
+    private double[] leastNorm(double[] b) {
+        double[] x = transposeTimes(normalSolve(b));
+        for (int k = 0; k < REFINEMENTS; k++) {
+            double[] ax = times(x);
+            double[] res = new double[m];
+            for (int i = 0; i < m; i++) res[i] = b[i] - ax[i];
+            double[] dx = transposeTimes(normalSolve(res));
+            for (int j = 0; j < n; j++) x[j] += dx[j];
+        }
+        return x;
+    }
+
+    /** u with A_s^T u = w for compatible deformations w (the least-squares solution, exact when w is compatible), refined. */
+    private double[] compatibleDisplacements(double[] w) {
+        double[] u = normalSolve(times(w));
+        for (int k = 0; k < REFINEMENTS; k++) {
+            double[] atu = transposeTimes(u);
+            double[] res = new double[n];
+            for (int j = 0; j < n; j++) res[j] = w[j] - atu[j];
+            double[] du = normalSolve(times(res));
+            for (int i = 0; i < m; i++) u[i] += du[i];
+        }
+        return u;
+    }
+
+    /**
+     * The bounded faces of the plane drawing, nodes plus a ground vertex far below joined to
+     * every support, each as a list of edge ids (members first by index, then one edge per
+     * support); null when the drawing is not planar (the face count disagrees with Euler's).
+     */
+    private List<int[]> faces() {
+        List<Node> nodes = new ArrayList<>(model.nodes().values());
+        Map<String, Integer> index = new HashMap<>();
+        for (int k = 0; k < nodes.size(); k++) index.put(nodes.get(k).name(), k);
+        int nv = nodes.size() + 1, ground = nodes.size();
+        double minY = Double.POSITIVE_INFINITY, sumX = 0;
+        for (Node nd : nodes) {
+            minY = Math.min(minY, nd.yM());
+            sumX += nd.xM();
+        }
+        double[] x = new double[nv], y = new double[nv];
+        for (int k = 0; k < nodes.size(); k++) {
+            x[k] = nodes.get(k).xM();
+            y[k] = nodes.get(k).yM();
+        }
+        x[ground] = sumX / nodes.size();
+        y[ground] = minY - 1e3 * model.extentM() - 1;
+        List<int[]> edges = new ArrayList<>();
+        List<Member> members = new ArrayList<>(model.members().values());
+        for (Member mem : members) edges.add(new int[]{index.get(mem.from()), index.get(mem.to())});
+        supportNodes = new ArrayList<>();
+        for (Support s : model.supports().values()) {
+            edges.add(new int[]{index.get(s.node()), ground});
+            supportNodes.add(s.node());
+        }
+        memberList = members;
+        int ne = edges.size();
+        List<List<Integer>> out = new ArrayList<>();
+        for (int v = 0; v < nv; v++) out.add(new ArrayList<>());
+        for (int e = 0; e < ne; e++) {
+            out.get(edges.get(e)[0]).add(2 * e);
+            out.get(edges.get(e)[1]).add(2 * e + 1);
+        }
+        double[] angle = new double[2 * ne];
+        int[] head = new int[2 * ne], tail = new int[2 * ne];
+        for (int e = 0; e < ne; e++) {
+            int a = edges.get(e)[0], b = edges.get(e)[1];
+            tail[2 * e] = a;
+            head[2 * e] = b;
+            tail[2 * e + 1] = b;
+            head[2 * e + 1] = a;
+            angle[2 * e] = Math.atan2(y[b] - y[a], x[b] - x[a]);
+            angle[2 * e + 1] = Math.atan2(y[a] - y[b], x[a] - x[b]);
+        }
+        int[] slot = new int[2 * ne];
+        for (int v = 0; v < nv; v++) {
+            List<Integer> l = out.get(v);
+            l.sort((p, q) -> angle[p] != angle[q] ? Double.compare(angle[p], angle[q]) : Integer.compare(p, q));
+            for (int k = 0; k < l.size(); k++) slot[l.get(k)] = k;
+        }
+        boolean[] used = new boolean[2 * ne];
+        List<int[]> faces = new ArrayList<>();
+        List<Double> areas = new ArrayList<>();
+        for (int h0 = 0; h0 < 2 * ne; h0++) {
+            if (used[h0]) continue;
+            List<Integer> face = new ArrayList<>();
+            double area = 0;
+            int h = h0;
+            int guard = 0;
+            while (!used[h]) {
+                used[h] = true;
+                face.add(h / 2);
+                area += x[tail[h]] * y[head[h]] - x[head[h]] * y[tail[h]];
+                int v = head[h], twin = h ^ 1;
+                List<Integer> l = out.get(v);
+                int k = slot[twin];
+                h = l.get((k - 1 + l.size()) % l.size()); // the next edge clockwise from the way back
+                if (++guard > 4 * ne + 4) return null;
+            }
+            faces.add(face.stream().mapToInt(Integer::intValue).toArray());
+            areas.add(area / 2);
+        }
+        // the outer face is the one of most negative area; Euler: bounded faces = E - V + 1 (connected)
+        int outer = 0;
+        for (int k = 1; k < areas.size(); k++) if (areas.get(k) < areas.get(outer)) outer = k;
+        if (faces.size() - 1 != ne - nv + 1) return null;
+        List<int[]> bounded = new ArrayList<>();
+        for (int k = 0; k < faces.size(); k++) {
+            if (k == outer) continue;
+            if (areas.get(k) < -1e-9 * model.extentM() * model.extentM()) return null; // a second negative face: crossings
+            bounded.add(faces.get(k));
+        }
+        return bounded;
+    }
+
+    private List<Member> memberList;
+    private List<String> supportNodes;
+
+    /** The self-stress states local to one ring: the null space of the ring's own equilibrium equations. */
+    private List<Map<Integer, Double>> ringStates(int[] face) {
+        java.util.Set<String> memberNames = new java.util.LinkedHashSet<>(), supports = new java.util.LinkedHashSet<>();
+        for (int e : face) {
+            if (e < memberList.size()) memberNames.add(memberList.get(e).name());
+            else supports.add(supportNodes.get(e - memberList.size()));
+        }
+        List<Integer> cols = new ArrayList<>();
+        for (int j = 0; j < n; j++) {
+            EquilibriumMatrix.Unknown u = eq.unknowns().get(j);
+            if (u.kind() == EquilibriumMatrix.Kind.REACTION ? supports.contains(u.owner()) : memberNames.contains(u.owner())) cols.add(j);
+        }
+        java.util.TreeSet<Integer> rows = new java.util.TreeSet<>();
+        for (int j : cols) for (int i : colRows[j]) rows.add(i);
+        List<Integer> rowList = new ArrayList<>(rows);
+        Map<Integer, Integer> rowAt = new HashMap<>();
+        for (int k = 0; k < rowList.size(); k++) rowAt.put(rowList.get(k), k);
+        int nr = Math.max(rowList.size(), cols.size()), nc = cols.size();
+        double[][] a = new double[nr][nc];
+        for (int c = 0; c < nc; c++) {
+            int j = cols.get(c);
+            for (int k = 0; k < colRows[j].length; k++) a[rowAt.get(colRows[j][k])][c] = colVals[j][k];
+        }
+        List<Map<Integer, Double>> out = new ArrayList<>();
+        if (nc == 0) return out;
+        SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(a, false));
+        double[] sv = svd.getSingularValues();
+        RealMatrix v = svd.getV();
+        double max = sv.length == 0 ? 0 : sv[0];
+        for (int k = 0; k < nc; k++) {
+            if (k < sv.length && sv[k] > RING_NULL_TOLERANCE * max) continue;
+            Map<Integer, Double> state = new LinkedHashMap<>();
+            double big = 0;
+            for (int c = 0; c < nc; c++) big = Math.max(big, Math.abs(v.getEntry(c, k)));
+            for (int c = 0; c < nc; c++) {
+                double val = v.getEntry(c, k);
+                if (Math.abs(val) > 1e-13 * big) state.put(cols.get(c), val);
+            }
+            out.add(state);
+        }
+        return out;
+    }
+}
