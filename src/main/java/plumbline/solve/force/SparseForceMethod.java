@@ -132,13 +132,28 @@ final class SparseForceMethod {
         int degree = n - m;
         faces.sort(java.util.Comparator.comparingInt(f -> f.length));
         List<Map<Integer, Double>> states = new ArrayList<>();
+        List<int[]> taken = new ArrayList<>();
         for (int[] face : faces) {
             if (states.size() >= degree) break;
-            if (face.length > LONGEST_RING) {
-                return EngineResult.declined(engine, "a closed ring of " + face.length + " members is needed for the "
-                        + "remaining self-stress states; the sparse force method takes rings of at most " + LONGEST_RING);
+            if (face.length > LONGEST_RING) break;
+            addStates(states, ringStates(face, states));
+            taken.add(face);
+        }
+        // states that need two neighbouring rings together (a continuous beam on pinned supports,
+        // a hinge between two panels): each pair of rings that share a member, beyond the states found
+        Map<Integer, List<Integer>> facesOfEdge = new HashMap<>();
+        for (int f = 0; f < taken.size(); f++) for (int e : taken.get(f)) facesOfEdge.computeIfAbsent(e, k -> new ArrayList<>()).add(f);
+        java.util.Set<Long> tried = new java.util.HashSet<>();
+        for (int a = 0; a < taken.size() && states.size() < degree; a++) {
+            java.util.TreeSet<Integer> neighbours = new java.util.TreeSet<>();
+            for (int e : taken.get(a)) for (int f : facesOfEdge.get(e)) if (f > a) neighbours.add(f);
+            for (int b : neighbours) {
+                if (states.size() >= degree || !tried.add((long) a * taken.size() + b)) continue;
+                int[] union = java.util.stream.IntStream.concat(Arrays.stream(taken.get(a)), Arrays.stream(taken.get(b)))
+                        .distinct().toArray();
+                if (union.length > LONGEST_RING) continue;
+                addStates(states, ringStates(union, states));
             }
-            states.addAll(ringStates(face));
         }
         if (states.size() != degree) {
             return EngineResult.declined(engine, "the rings of the drawing give " + states.size() + " self-stress states for a degree of "
@@ -381,21 +396,69 @@ final class SparseForceMethod {
         return bounded;
     }
 
+    /**
+     * Removes from w its components along the orthonormal basis (twice, for accuracy); if a
+     * part of at least 1e-6 of w remains, normalizes it, adds it to the basis and returns true.
+     */
+    private static boolean orthogonalize(double[] w, List<double[]> basis) {
+        double before = 0;
+        for (double x : w) before += x * x;
+        before = Math.sqrt(before);
+        if (before == 0) return false;
+        for (int pass = 0; pass < 2; pass++) {
+            for (double[] b : basis) {
+                double d = 0;
+                for (int i = 0; i < w.length; i++) d += w[i] * b[i];
+                for (int i = 0; i < w.length; i++) w[i] -= d * b[i];
+            }
+        }
+        double after = 0;
+        for (double x : w) after += x * x;
+        after = Math.sqrt(after);
+        if (after <= 1e-6 * before) return false;
+        for (int i = 0; i < w.length; i++) w[i] /= after;
+        basis.add(w.clone());
+        return true;
+    }
+
+    private Map<String, List<Integer>> unknownsOfMember, unknownsOfSupport;
+
+    /** Index of the states found so far by the unknowns they involve. */
+    private final Map<Integer, List<Integer>> statesByUnknown = new HashMap<>();
+
+    private void addStates(List<Map<Integer, Double>> states, List<Map<Integer, Double>> more) {
+        for (Map<Integer, Double> st : more) {
+            for (int j : st.keySet()) statesByUnknown.computeIfAbsent(j, k -> new ArrayList<>()).add(states.size());
+            states.add(st);
+        }
+    }
+
     private List<Member> memberList;
     private List<String> supportNodes;
 
-    /** The self-stress states local to one ring: the null space of the ring's own equilibrium equations. */
-    private List<Map<Integer, Double>> ringStates(int[] face) {
+    /**
+     * The self-stress states local to one ring (or union of rings): the null space of its own
+     * equilibrium equations, less the span of the {@code known} states it contains.
+     */
+    private List<Map<Integer, Double>> ringStates(int[] face, List<Map<Integer, Double>> known) {
         java.util.Set<String> memberNames = new java.util.LinkedHashSet<>(), supports = new java.util.LinkedHashSet<>();
         for (int e : face) {
             if (e < memberList.size()) memberNames.add(memberList.get(e).name());
             else supports.add(supportNodes.get(e - memberList.size()));
         }
-        List<Integer> cols = new ArrayList<>();
-        for (int j = 0; j < n; j++) {
-            EquilibriumMatrix.Unknown u = eq.unknowns().get(j);
-            if (u.kind() == EquilibriumMatrix.Kind.REACTION ? supports.contains(u.owner()) : memberNames.contains(u.owner())) cols.add(j);
+        if (unknownsOfMember == null) {
+            unknownsOfMember = new HashMap<>();
+            unknownsOfSupport = new HashMap<>();
+            for (int j = 0; j < n; j++) {
+                EquilibriumMatrix.Unknown u = eq.unknowns().get(j);
+                (u.kind() == EquilibriumMatrix.Kind.REACTION ? unknownsOfSupport : unknownsOfMember)
+                        .computeIfAbsent(u.owner(), k -> new ArrayList<>()).add(j);
+            }
         }
+        List<Integer> cols = new ArrayList<>();
+        for (String mem : memberNames) cols.addAll(unknownsOfMember.getOrDefault(mem, List.of()));
+        for (String sup : supports) cols.addAll(unknownsOfSupport.getOrDefault(sup, List.of()));
+        java.util.Collections.sort(cols);
         java.util.TreeSet<Integer> rows = new java.util.TreeSet<>();
         for (int j : cols) for (int i : colRows[j]) rows.add(i);
         List<Integer> rowList = new ArrayList<>(rows);
@@ -413,15 +476,28 @@ final class SparseForceMethod {
         double[] sv = svd.getSingularValues();
         RealMatrix v = svd.getV();
         double max = sv.length == 0 ? 0 : sv[0];
+        // an orthonormal basis, in the ring's coordinates, of the known states lying inside it
+        Map<Integer, Integer> colAt = new HashMap<>();
+        for (int c = 0; c < nc; c++) colAt.put(cols.get(c), c);
+        List<double[]> basis = new ArrayList<>();
+        java.util.Set<Integer> candidates = new java.util.TreeSet<>();
+        for (int j : cols) candidates.addAll(statesByUnknown.getOrDefault(j, List.of()));
+        for (int idx : candidates) {
+            Map<Integer, Double> st = known.get(idx);
+            if (!colAt.keySet().containsAll(st.keySet())) continue;
+            double[] w = new double[nc];
+            for (var e : st.entrySet()) w[colAt.get(e.getKey())] = e.getValue();
+            orthogonalize(w, basis);
+        }
         for (int k = 0; k < nc; k++) {
             if (k < sv.length && sv[k] > RING_NULL_TOLERANCE * max) continue;
+            double[] w = new double[nc];
+            for (int c = 0; c < nc; c++) w[c] = v.getEntry(c, k);
+            if (!orthogonalize(w, basis)) continue; // already spanned by known states
             Map<Integer, Double> state = new LinkedHashMap<>();
             double big = 0;
-            for (int c = 0; c < nc; c++) big = Math.max(big, Math.abs(v.getEntry(c, k)));
-            for (int c = 0; c < nc; c++) {
-                double val = v.getEntry(c, k);
-                if (Math.abs(val) > 1e-13 * big) state.put(cols.get(c), val);
-            }
+            for (double x : w) big = Math.max(big, Math.abs(x));
+            for (int c = 0; c < nc; c++) if (Math.abs(w[c]) > 1e-13 * big) state.put(cols.get(c), w[c]);
             out.add(state);
         }
         return out;
