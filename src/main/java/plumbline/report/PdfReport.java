@@ -553,13 +553,49 @@ public final class PdfReport {
     private void working(Document doc) throws DocumentException {
         EngineResult force = review.analysis().engines().get("force");
         heading(doc, "7  Force-method working");
-        if (force == null) {
-            para(doc, "The force method was not run for this model" + (notes.isEmpty() ? "." : ": " + String.join("; ", notes)), body);
+        if (force == null || force.declined() || !force.stable()) {
+            String why = force == null ? String.join("; ", notes) : force.instability();
+            para(doc, "The force method was not run for this model" + (why == null || why.isEmpty() ? "." : ": " + why), body);
             return;
         }
-        para(doc, "Redundants, flexibility coefficients delta_ij = sum of integral(m_i m_j / EI + n_i n_j / EA) (SI units) and, per "
-                + "load case, the compatibility terms Delta_i0 and the redundant values solving delta z + Delta_0 = 0:", body);
-        for (String n : force.notes()) para(doc, n, small);
+        var w = force.working();
+        for (String n : force.notes()) {
+            if (n.startsWith("flexibility coefficients delta_ij") || n.startsWith("case ")) continue; // tabulated below
+            para(doc, n, small);
+        }
+        if (w == null || w.flexibility().length == 0) return;
+        List<String> red = w.redundants();
+        para(doc, "Flexibility coefficients delta_ij = sum of integral(m_i m_j / EI + n_i n_j / EA) + 1/k of springs, "
+                + "in SI units (m/N, rad/N, m/(N*m), rad/(N*m)); redundant i is a unit force or moment:", body);
+        float[] widths = new float[red.size() + 1];
+        java.util.Arrays.fill(widths, 1f);
+        widths[0] = 1.2f;
+        String[] heads = new String[red.size() + 1];
+        heads[0] = "delta_ij";
+        for (int i = 0; i < red.size(); i++) heads[i + 1] = red.get(i);
+        PdfPTable t = table(widths, heads);
+        for (int i = 0; i < red.size(); i++) {
+            t.addCell(cell(red.get(i), smallBold, null));
+            for (int j = 0; j < red.size(); j++) t.addCell(cell(String.format(Locale.ROOT, "%.5g", w.flexibility()[i][j]), small, null));
+        }
+        doc.add(t);
+        para(doc, "Compatibility: delta z + Delta_0 = 0 per load case; Delta_i0 is the displacement of the released "
+                + "structure at redundant i under the case's loads, temperatures and settlements; z the redundant values (N, N*m):", body);
+        String[] heads2 = new String[2 * red.size() + 1];
+        heads2[0] = "Load case";
+        for (int i = 0; i < red.size(); i++) {
+            heads2[1 + i] = "Delta_0 " + red.get(i);
+            heads2[1 + red.size() + i] = red.get(i);
+        }
+        float[] w2 = new float[2 * red.size() + 1];
+        java.util.Arrays.fill(w2, 1f);
+        PdfPTable t2 = table(w2, heads2);
+        for (var e : w.deltaZero().entrySet()) {
+            t2.addCell(cell(e.getKey(), smallBold, null));
+            for (double d : e.getValue()) t2.addCell(cell(String.format(Locale.ROOT, "%.5g", d), small, null));
+            for (double z : w.values().get(e.getKey())) t2.addCell(cell(String.format(Locale.ROOT, "%.5g", z), small, null));
+        }
+        doc.add(t2);
     }
 
     private void warnings(Document doc) throws DocumentException {
@@ -596,6 +632,7 @@ public final class PdfReport {
         heading(doc, "10  Sign-off");
         PdfPTable t = new PdfPTable(new float[]{1.4f, 2.3f, 1.4f, 1.6f});
         t.setWidthPercentage(100);
+        t.setKeepTogether(true);
         String[][] rows = {{"Checked by", m.job().checker()}, {"Originator", m.job().originator()}, {"Reviewed by", ""}};
         for (String[] r : rows) {
             t.addCell(cell(r[0], smallBold, null));

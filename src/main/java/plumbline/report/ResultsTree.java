@@ -51,7 +51,21 @@ public final class ResultsTree {
         if (sols != null) root.put("envelope", envelope(m, a, sols));
         root.put("engine", engineShown);
         Map<String, Object> engines = new LinkedHashMap<>();
-        a.engines().forEach((k, v) -> engines.put(k, map("stable", v.stable(), "declined", v.declined(), "instability", v.instability(), "notes", v.notes())));
+        a.engines().forEach((k, v) -> {
+            Map<String, Object> e = map("stable", v.stable(), "declined", v.declined(), "instability", v.instability(), "notes", v.notes());
+            if (v.working() != null) {
+                List<Object> rows = new ArrayList<>();
+                for (double[] row : v.working().flexibility()) {
+                    List<Object> r = new ArrayList<>();
+                    for (double x : row) r.add(num(x));
+                    rows.add(r);
+                }
+                Map<String, Object> cases = new LinkedHashMap<>();
+                v.working().deltaZero().forEach((c, d0) -> cases.put(c, map("Delta_i0", list(d0), "redundants", list(v.working().values().get(c)))));
+                e.put("working", map("units", "SI (N, m, rad)", "redundants", v.working().redundants(), "flexibility", rows, "cases", cases));
+            }
+            engines.put(k, e);
+        });
         root.put("engines", engines);
         root.put("agreement", agreement == null ? null : map("max_relative_difference", num(agreement)));
         List<Object> claims = new ArrayList<>();
@@ -257,6 +271,12 @@ public final class ResultsTree {
 
     static Object num(double v) {
         return Double.isFinite(v) ? (Object) v : null;
+    }
+
+    static List<Object> list(double[] v) {
+        List<Object> out = new ArrayList<>();
+        for (double x : v) out.add(num(x));
+        return out;
     }
 
     static Map<String, Object> map(Object... kv) {

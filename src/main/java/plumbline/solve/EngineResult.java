@@ -7,13 +7,14 @@ import java.util.Map;
  * What an engine returns for a model: the solution of every load case, unfactored, or,
  * when the engine finds the structure cannot carry load, why (singularity is a state, not
  * an exception). {@code notes} carry engine-specific remarks for the report; {@code declined}
- * marks an engine that did not take the model on, which is not instability.
+ * marks an engine that did not take the model on, which is not instability; {@code working}
+ * is the force method's record for the report (null for the stiffness method).
  */
 public record EngineResult(String engine, boolean stable, String instability, Map<String, Solution> cases,
-                           List<String> notes, boolean declined) {
+                           List<String> notes, boolean declined, ForceWorking working) {
 
     public EngineResult(String engine, boolean stable, String instability, Map<String, Solution> cases, List<String> notes) {
-        this(engine, stable, instability, cases, notes, false);
+        this(engine, stable, instability, cases, notes, false, null);
     }
 
     public EngineResult {
@@ -22,7 +23,7 @@ public record EngineResult(String engine, boolean stable, String instability, Ma
     }
 
     public static EngineResult unstable(String engine, String why) {
-        return new EngineResult(engine, false, why, Map.of(), List.of(), false);
+        return new EngineResult(engine, false, why, Map.of(), List.of(), false, null);
     }
 
     /**
@@ -30,6 +31,6 @@ public record EngineResult(String engine, boolean stable, String instability, Ma
      * does not apply), which says nothing about the structure's stability.
      */
     public static EngineResult declined(String engine, String why) {
-        return new EngineResult(engine, false, why, Map.of(), List.of(), true);
+        return new EngineResult(engine, false, why, Map.of(), List.of(), true, null);
     }
 }

@@ -19,6 +19,7 @@ import plumbline.model.Settlement;
 import plumbline.model.Support;
 import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
+import plumbline.solve.ForceWorking;
 import plumbline.solve.Equilibrium;
 import plumbline.solve.MemberActions;
 import plumbline.solve.MemberSolution;
@@ -202,6 +203,7 @@ public final class ForceEngine implements Engine {
             row.put(e.node() + "/" + e.direction(), i);
         }
         Map<String, Solution> cases = new LinkedHashMap<>();
+        Map<String, double[]> deltaZeros = new LinkedHashMap<>(), redundantValues = new LinkedHashMap<>();
         StringBuilder working = new StringBuilder();
         working.append("redundants: ").append(r == 0 ? "none (statically determinate: solved by equilibrium alone)"
                 : String.join(", ", redundant.stream().map(j -> unk.get(j).label()).toList()));
@@ -233,7 +235,11 @@ public final class ForceEngine implements Engine {
                 double[] neg = new double[r];
                 for (int k = 0; k < r; k++) neg[k] = -delta0[k];
                 z = compat.solve(new org.apache.commons.math3.linear.ArrayRealVector(neg, false)).toArray();
-                if (r <= WORKING_SHOWN) notes.add("case " + c.name() + ": Delta_i0 = " + vectorText(delta0) + "; redundants = " + vectorText(z));
+                if (r <= WORKING_SHOWN) {
+                    notes.add("case " + c.name() + ": Delta_i0 = " + vectorText(delta0) + "; redundants = " + vectorText(z));
+                    deltaZeros.put(c.name(), delta0.clone());
+                    redundantValues.put(c.name(), z.clone());
+                }
             }
             double[] xs = x0.clone();
             for (int j = 0; j < n; j++) for (int k = 0; k < r; k++) xs[j] += x[j][k] * z[k];
@@ -246,7 +252,9 @@ public final class ForceEngine implements Engine {
             double[] u = primaryT.solve(new org.apache.commons.math3.linear.ArrayRealVector(wb, false)).toArray();
             cases.put(c.name(), assemble(model, eq, c, actions, particular, xs, u, row));
         }
-        return new EngineResult(name(), true, null, cases, notes);
+        ForceWorking record = new ForceWorking(redundant.stream().map(j -> unk.get(j).label()).toList(),
+                r > 0 && r <= WORKING_SHOWN ? delta.getData() : new double[0][], deltaZeros, redundantValues);
+        return new EngineResult(name(), true, null, cases, notes, false, record);
     }
 
     private static boolean isMoment(EquilibriumMatrix.Unknown u) {
