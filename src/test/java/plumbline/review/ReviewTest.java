@@ -17,11 +17,7 @@ import plumbline.solve.stiffness.StiffnessEngine;
 class ReviewTest {
 
     static Review review(String claims, double cliTolerance) {
-        Model m = Models.yaml("""
-                format: plumbline/1
-                units: {force: kN, length: m}
-                materials: {s: {E: 200 GPa}}
-                sections: {G: {A: 0.01, I: 1.0e-4, material: s}}
+        Model m = Models.yaml(plumbline.Models.HEAD + """
                 nodes: {A: [0, 0], B: [6, 0]}
                 supports: {A: pinned, B: roller}
                 members: {M1: {from: A, to: B, section: G}}

@@ -17,11 +17,7 @@ import plumbline.model.Model;
 class StandardCombinationsTest {
 
     static Model model(String sets) {
-        return Models.yaml("""
-                format: plumbline/1
-                units: {force: kN, length: m}
-                materials: {s: {E: 200 GPa}}
-                sections: {G: {A: 0.01, I: 1.0e-4, material: s}}
+        return Models.yaml(plumbline.Models.HEAD + """
                 nodes: {A: [0, 0], B: [6, 0]}
                 supports: {A: pinned, B: roller}
                 members: {M1: {from: A, to: B, section: G}}

@@ -20,11 +20,7 @@ import plumbline.solve.stiffness.StiffnessEngine;
 class ConditioningTest {
 
     static String model(String k) {
-        return """
-                format: plumbline/1
-                units: {force: kN, length: m}
-                materials: {s: {E: 200 GPa}}
-                sections: {G: {A: 0.01, I: 1.0e-4, material: s}}
+        return plumbline.Models.HEAD + """
                 nodes: {A: [0, 0], B: [6, 0], C: [12, 0]}
                 supports: {A: {fix: [uy, rz], springs: {ux: %s}}, C: roller}
                 members: {M1: {from: A, to: B, section: G}, M2: {from: B, to: C, section: G}}

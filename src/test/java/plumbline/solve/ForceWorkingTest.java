@@ -14,11 +14,7 @@ import plumbline.solve.force.ForceEngine;
 /** The force method's working, as a checker compares it with a hand calculation. */
 class ForceWorkingTest {
 
-    static final String PROPPED = """
-            format: plumbline/1
-            units: {force: kN, length: m}
-            materials: {s: {E: 200 GPa}}
-            sections: {G: {A: 0.01, I: 1.0e-4, material: s}}
+    static final String PROPPED = plumbline.Models.HEAD + """
             nodes: {A: [0, 0], B: [6, 0]}
             supports: {A: fixed, B: roller}
             members: {M1: {from: A, to: B, section: G}}

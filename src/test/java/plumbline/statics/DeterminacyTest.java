@@ -15,11 +15,7 @@ import plumbline.Models;
  */
 class DeterminacyTest {
 
-    static final String HEAD = """
-            format: plumbline/1
-            units: {force: kN, length: m}
-            materials: {s: {E: 200 GPa}}
-            sections: {G: {A: 0.01, I: 1.0e-4, material: s}}
+    static final String HEAD = plumbline.Models.HEAD + """
             """;
 
     @ParameterizedTest(name = "{0}")
