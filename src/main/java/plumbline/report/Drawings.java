@@ -42,6 +42,11 @@ public final class Drawings {
     static final Color DEFLECTED = new Color(0xB0, 0x3A, 0x2E);
     static final Color MECHANISM = new Color(0xB0, 0x3A, 0x2E);
 
+    /** Above this many members, drawings leave out names and peak labels (they would cover the picture). */
+    static final int LABEL_LIMIT = 60;
+    /** Above this many members, the model sketch leaves out the load arrows. */
+    static final int LOAD_LIMIT = 300;
+
     private Drawings() {
     }
 
@@ -87,7 +92,8 @@ public final class Drawings {
         drawMembers(g, m, f, new BasicStroke(2.0f), MEMBER);
         for (Member mem : m.members().values()) hinges(g, m, f, mem, sym);
         for (Support s : m.supports().values()) support(g, f, m.node(s.node()), s, sym);
-        if (loads != null) drawLoads(g, m, f, loads, sym);
+        if (loads != null && m.members().size() <= LOAD_LIMIT) drawLoads(g, m, f, loads, sym);
+        if (m.members().size() > LABEL_LIMIT) return; // names would hide the structure; the tables carry them
         g.setColor(LABEL);
         for (Node n : m.nodes().values()) g.drawString(n.name(), (float) (f.x(n.xM()) + 3), (float) (f.y(n.yM()) - 3));
         g.setFont(g.getFont().deriveFont(Font.ITALIC));
@@ -326,6 +332,7 @@ public final class Drawings {
                 g.setStroke(compression ? new BasicStroke(2.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 1f, new float[]{5f, 2.5f}, 0f)
                         : new BasicStroke(2.2f));
                 if (Math.abs(v) > 1e-9 * peak) g.draw(new Line2D.Double(x0, y0, f.x(b.xM()), f.y(b.yM())));
+                if (m.members().size() > LABEL_LIMIT) continue;
                 String text = Math.abs(v) <= 1e-9 * peak ? "0" : Console.fmt(Math.abs(m.units().fromInternal(v, kind.dimension)))
                         + (compression ? " C" : " T");
                 double mx = (x0 + f.x(b.xM())) / 2, my = (y0 + f.y(b.yM())) / 2;
@@ -357,7 +364,7 @@ public final class Drawings {
             g.setColor(kind.color);
             g.setStroke(new BasicStroke(1.0f));
             g.draw(path);
-            labelPeaks(g, m, f, mem, p, k, kind);
+            if (m.members().size() <= LABEL_LIMIT) labelPeaks(g, m, f, mem, p, k, kind);
         }
         if (kind == Kind.DEFLECTION) {
             g.setColor(kind.color);
@@ -431,6 +438,7 @@ public final class Drawings {
             double[] u = e.getValue();
             if (Math.hypot(u[0], u[1]) > 1e-6) arrow(g, f.x(n.xM()), f.y(n.yM()), f.x(n.xM()) + u[0] * shift, f.y(n.yM()) - u[1] * shift, 5);
         }
+        if (m.members().size() > LABEL_LIMIT) return;
         g.setColor(LABEL);
         for (Node n : m.nodes().values()) g.drawString(n.name(), (float) (f.x(n.xM()) + 3), (float) (f.y(n.yM()) - 3));
     }

@@ -346,12 +346,16 @@ public final class PdfReport {
         heading(doc, "2  The model as checked");
         para(doc, String.format(Locale.ROOT, "%d nodes, %d members, %d supports, %d load cases, %d load sets checked. "
                         + "Loads drawn: %s.", m.nodes().size(), m.members().size(), m.supports().size(), m.loadCases().size(),
-                review.analysis().loadSets().size(), m.loadCases().isEmpty() ? "none" : "load case " + m.loadCases().get(0).name()), body);
+                review.analysis().loadSets().size(), m.loadCases().isEmpty() ? "none"
+                        : m.members().size() > Drawings.LOAD_LIMIT ? "none at this size" : "load case " + m.loadCases().get(0).name()), body);
         LoadCase first = m.loadCases().isEmpty() ? null : m.loadCases().get(0);
         doc.add(picture(writer, 499, 230, g -> Drawings.model(g, m, first, 499, 230)));
+        if (m.members().size() > Drawings.LABEL_LIMIT) para(doc, "Names and peak values are left out of the drawings of a model "
+                + "this size; the tables and the JSON carry them.", small);
         para(doc, "Symbols: wedge = pinned support, wedge on rollers = roller, hatched bar = fixed support, zigzag = spring, "
                 + "open circle = hinge (or truss member end), amber arrows = loads.", small);
-        for (LoadCase c : m.loadCases().subList(Math.min(1, m.loadCases().size()), Math.min(3, m.loadCases().size()))) {
+        int shown = m.members().size() > Drawings.LOAD_LIMIT ? 0 : Math.min(3, m.loadCases().size());
+        for (LoadCase c : m.loadCases().subList(Math.min(1, shown), Math.max(Math.min(1, shown), shown))) {
             para(doc, "Loads of load case " + c.name() + " (" + c.type() + (c.pattern() ? ", pattern loaded" : "") + "):", small);
             doc.add(picture(writer, 499, 170, g -> Drawings.model(g, m, c, 499, 170)));
         }
