@@ -35,6 +35,7 @@ class ReportTest {
             "three-span-beam.yaml, three-span-beam-claims.csv",
             "portal-frame.yaml, portal-frame-claims.yaml",
             "office-floor-beam.yaml, office-floor-beam-claims.yaml",
+            "gable-frame-us.yaml, gable-frame-us-claims.csv",
             "../checks/20-two-span-pattern-live.yaml, ",
     })
     void pdfAndJsonAgree(String model, String claims) throws Exception {

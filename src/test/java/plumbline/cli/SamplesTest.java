@@ -20,6 +20,7 @@ class SamplesTest {
             "three-span-beam.yaml, three-span-beam-claims.csv, R-A-SLS-Fy",
             "portal-frame.yaml, portal-frame-claims.yaml, R-E-ULS-W-Fx",
             "office-floor-beam.yaml, office-floor-beam-claims.yaml, M-S2-asce7-strength/2-M_max",
+            "gable-frame-us.yaml, gable-frame-us-claims.csv, R-A-S-Fy R-A-S-Fx",
     })
     @SuppressWarnings("unchecked")
     void sampleRuns(String model, String claims, String slip) throws Exception {
@@ -31,7 +32,7 @@ class SamplesTest {
         assertEquals("mismatch", tree.get("verdict"));
         List<Map<String, Object>> cl = (List<Map<String, Object>>) tree.get("claims");
         for (Map<String, Object> c : cl) {
-            assertEquals(c.get("id").equals(slip) ? "mismatch" : "ok", c.get("status"), c.toString());
+            assertEquals(java.util.List.of(slip.split(" ")).contains(c.get("id")) ? "mismatch" : "ok", c.get("status"), c.toString());
         }
     }
 
