@@ -293,6 +293,7 @@ public final class Drawings {
             peak = Math.max(peak, Math.max(Math.abs(p.max().value()), Math.abs(p.min().value())));
         }
         drawMembers(g, m, f, new BasicStroke(1.0f), new Color(0x90, 0xA4, 0xAE));
+        java.util.List<java.awt.geom.Rectangle2D> labels = new java.util.ArrayList<>();
         double room = margin * 0.7;
         // moment is drawn on the tension face (positive towards local -y); axial and shear force
         // with positive values on the local +y side, as usually drawn
@@ -364,7 +365,7 @@ public final class Drawings {
             g.setColor(kind.color);
             g.setStroke(new BasicStroke(1.0f));
             g.draw(path);
-            if (m.members().size() <= LABEL_LIMIT) labelPeaks(g, m, f, mem, p, k, kind);
+            if (m.members().size() <= LABEL_LIMIT) labelPeaks(g, m, f, mem, p, k, kind, labels);
         }
         if (kind == Kind.DEFLECTION) {
             g.setColor(kind.color);
@@ -397,7 +398,9 @@ public final class Drawings {
         return d == 0 ? 1 : d;
     }
 
-    private static void labelPeaks(Graphics2D g, Model m, Frame f, Member mem, Piecewise p, double k, Kind kind) {
+    /** Labels a member's largest and smallest values, skipping any that would overlap a label already drawn. */
+    private static void labelPeaks(Graphics2D g, Model m, Frame f, Member mem, Piecewise p, double k, Kind kind,
+                                   java.util.List<java.awt.geom.Rectangle2D> drawn) {
         Node a = m.node(mem.from()), b = m.node(mem.to());
         double lm = m.lengthM(mem), ex = (b.xM() - a.xM()) / lm, ey = (b.yM() - a.yM()) / lm;
         Piecewise.Extreme[] ext = {p.max(), p.min()};
@@ -411,7 +414,12 @@ public final class Drawings {
             double sx = f.x(px) + ey * v * k, sy = f.y(py) + ex * v * k;
             String text = Console.fmt(m.units().fromInternal(v, kind.dimension));
             boolean below = (v * k) >= 0 == (ex >= 0);
-            g.drawString(text, (float) (sx + 2), (float) (sy + (below ? 9 : -2)));
+            java.awt.FontMetrics fm = g.getFontMetrics();
+            float tx = (float) (sx + 2), ty = (float) (sy + (below ? 9 : -2));
+            java.awt.geom.Rectangle2D box = new java.awt.geom.Rectangle2D.Double(tx, ty - fm.getAscent(), fm.stringWidth(text), fm.getAscent());
+            if (drawn.stream().anyMatch(r -> r.intersects(box))) continue;
+            drawn.add(box);
+            g.drawString(text, tx, ty);
         }
     }
 
