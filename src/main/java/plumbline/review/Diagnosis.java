@@ -76,6 +76,26 @@ final class Diagnosis {
                         fmt(c.writtenValue()), c.writtenUnit(), fmt(shownComputed), unitShown, s.label, fmt(inSlip))));
             }
         }
+        // an input slip scales a linear result as a whole: loads in psf read as kPa (or the
+        // reverse) scale every force; E in ksi read as MPa, or MPa as GPa, scales deflections
+        double psf = LBF / (FT * FT);
+        hs.add(new Hypothesis(computed * 1e3 / psf, String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: "
+                + "loads written in kPa where psf were meant (or values mixed between the two)", what, fmt(shownComputed), unitShown, 1e3 / psf)));
+        hs.add(new Hypothesis(computed * psf / 1e3, String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: "
+                + "loads written in psf where kPa were meant", what, fmt(shownComputed), unitShown, psf / 1e3)));
+        if (c.dimension().equals(Dimension.LENGTH) || c.dimension().equals(Dimension.ANGLE)) {
+            double ksi = 1e3 * LBF / (IN * IN);
+            for (double[] r : new double[][]{{ksi / 1e6, 0}, {1e6 / ksi, 1}, {1e3, 2}, {1e-3, 3}}) {
+                String why = switch ((int) r[1]) {
+                    case 0 -> "E in the originator's run appears to be in MPa where ksi were meant (deflections scale by 6.895)";
+                    case 1 -> "E in the originator's run appears to be in ksi where MPa were meant";
+                    case 2 -> "E in the originator's run appears a thousand times too small (written in MPa where GPa were meant)";
+                    default -> "E in the originator's run appears a thousand times too large (written in GPa where MPa were meant)";
+                };
+                hs.add(new Hypothesis(computed * r[0], String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: %s",
+                        what, fmt(shownComputed), unitShown, r[0], why)));
+            }
+        }
         hs.add(new Hypothesis(-computed, String.format(Locale.ROOT,
                 "claimed %s has the opposite sign of the computed %s %s: a sign slip or another sign convention "
                         + "(reactions here are forces on the structure; M is positive sagging)", what, fmt(shownComputed), unitShown)));

@@ -61,6 +61,7 @@ class DiagnosisTest {
             "dead load alone, 0, load case D",
             "self-weight omitted, 0, self-weight omitted",
             "support taken as pinned, 0, support A taken as pinned instead of fixed",
+            "loads in kPa for psf, 20.885, loads written in kPa where psf were meant",
     })
     void plantedSlipIsNamed(String slip, double factor, String words) {
         double wD = 10 + 78.5 * 0.01, wL = 6, len = 6;

@@ -86,4 +86,16 @@ class ReviewTest {
         assertEquals(ClaimResult.Status.OK, c.status());
         assertEquals("asce7-strength/2", c.governing());
     }
+
+    @Test
+    void modulusInTheWrongUnitsIsNamedForADeflection() {
+        // simple beam deflection 5wL^4/384EI = 5 x 10 x 1296 / (384 x 20000) = 8.4375 mm (AISC Table 3-23 case 1,
+        // from memory); with E = 29000 written in MPa where ksi were meant, E is 6.895 times too small and the
+        // originator's deflection 6.895 times larger
+        double d = 5 * 10 * Math.pow(6, 4) / (384 * 20000.0) * 6.894757;
+        Review r = review("claims:\n  members:\n    - {member: M1, combo: D, deflection: " + String.format(Locale.ROOT, "%.6f", d) + "}\n", Double.NaN);
+        ClaimResult c = r.claims().get(0);
+        assertEquals(ClaimResult.Status.MISMATCH, c.status());
+        assertTrue(c.diagnosis().contains("E in the originator's run appears to be in MPa where ksi were meant"), c.diagnosis());
+    }
 }
