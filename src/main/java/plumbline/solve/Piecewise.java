@@ -69,12 +69,6 @@ public final class Piecewise {
         return new Extreme(-e.value, e.xM);
     }
 
-    /** Largest magnitude, with its sign. */
-    public Extreme absMax() {
-        Extreme hi = max(), lo = min();
-        return Math.abs(lo.value) > Math.abs(hi.value) ? lo : hi;
-    }
-
     private Extreme extreme(double sign) {
         double best = Double.NEGATIVE_INFINITY, where = 0;
         for (int k = 0; k < pieces.length; k++) {
@@ -93,14 +87,6 @@ public final class Piecewise {
             }
         }
         return new Extreme(best, where);
-    }
-
-    /** Exact integral of this function times {@code other} over [0, L]; both must share breakpoints. */
-    public double integrateProduct(Piecewise other) {
-        if (!Arrays.equals(x, other.x)) throw new IllegalArgumentException("breakpoints differ");
-        double s = 0;
-        for (int k = 0; k < pieces.length; k++) s += pieces[k].times(other.pieces[k]).integrate(x[k + 1] - x[k]);
-        return s;
     }
 
     public double integrate() {

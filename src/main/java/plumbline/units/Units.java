@@ -66,11 +66,6 @@ public final class Units {
     private Units() {
     }
 
-    /** The symbols accepted, in a stable order, for {@code plumbline units}. */
-    public static Map<String, Unit> symbols() {
-        return Map.copyOf(SYMBOLS);
-    }
-
     public static Iterable<Unit> listed() {
         return SYMBOLS.values();
     }
