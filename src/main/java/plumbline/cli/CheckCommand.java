@@ -43,6 +43,6 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
-        return Run.execute(model, claims, json, pdf, figures, "both", tolerance == null ? Double.NaN : tolerance, out, err);
+        return Run.execute(model, claims, json, pdf, figures, "both", tolerance == null ? Double.NaN : tolerance, true, out, err);
     }
 }

@@ -46,7 +46,7 @@ final class Run {
         return Main.INPUT;
     }
 
-    static int execute(Path model, List<Path> claims, Path json, Path pdf, Path figures, String method, double tolerance,
+    static int execute(Path model, List<Path> claims, Path json, Path pdf, Path figures, String method, double tolerance, boolean checking,
                        PrintWriter out, PrintWriter err) {
         Inputs in;
         try {
@@ -129,6 +129,7 @@ final class Run {
             }
         }
         out.print(Console.summary(r, a.solutions().isEmpty() ? "none" : names, agreement));
+        if (!checking) out.print(Console.results(r));
         for (String n : notes) out.print(Console.wrap("Note: " + n, "  "));
         if (json != null) out.println("Results written to " + json);
         if (pdf != null) out.println("Report written to " + pdf);

@@ -30,7 +30,7 @@ final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        return Run.execute(model, List.of(), json, null, null, method.name(), Double.NaN, spec.commandLine().getOut(),
+        return Run.execute(model, List.of(), json, null, null, method.name(), Double.NaN, false, spec.commandLine().getOut(),
                 spec.commandLine().getErr());
     }
 }

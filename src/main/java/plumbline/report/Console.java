@@ -120,6 +120,70 @@ public final class Console {
         return sb.toString();
     }
 
+    /** Load sets listed in full by {@code solve}; beyond this the JSON has them. */
+    static final int SETS_LISTED = 8;
+    /** Members listed one by one by {@code solve}; beyond this only the largest values. */
+    static final int MEMBERS_LISTED = 12;
+
+    /** The results of {@code solve} in 80 columns: reactions and member peaks per load set. */
+    public static String results(Review r) {
+        var a = r.analysis();
+        if (!a.stable() || a.primaryEngine() == null) return "";
+        Model m = a.model();
+        UnitSystem u = m.units();
+        String f = u.force().symbol(), mo = u.symbol(plumbline.units.Dimension.MOMENT), len = u.length().symbol();
+        StringBuilder sb = new StringBuilder();
+        var sols = a.solutions().get(a.primaryEngine());
+        int k = 0;
+        for (var set : a.loadSets()) {
+            if (k++ == SETS_LISTED) {
+                sb.append("  (" + (a.loadSets().size() - SETS_LISTED) + " more load sets in the JSON, --json FILE)\n");
+                break;
+            }
+            var res = sols.get(set.name());
+            sb.append(wrap("Load set " + set.name() + (res.patterned() ? " (pattern envelope)" : "") + ": " + set.origin(), "    "));
+            for (String node : m.supports().keySet()) {
+                String line = String.format(Locale.ROOT, "  reaction %-6s Fx %10s  Fy %10s  Mz %10s  (%s, %s)", node,
+                        fmt(u.fromInternal(res.reaction(node, 0, true), plumbline.units.Dimension.FORCE)),
+                        fmt(u.fromInternal(res.reaction(node, 1, true), plumbline.units.Dimension.FORCE)),
+                        fmt(u.fromInternal(res.reaction(node, 2, true), plumbline.units.Dimension.MOMENT)), f, mo);
+                sb.append(wrap(line, "    "));
+            }
+            if (m.members().size() <= MEMBERS_LISTED) {
+                for (String mem : m.members().keySet()) {
+                    String line = String.format(Locale.ROOT, "  member %-6s N %s..%s  V %s..%s  M %s..%s  defl %s", mem,
+                            peak(u, res, mem, "N_min"), peak(u, res, mem, "N_max"), peak(u, res, mem, "V_min"),
+                            peak(u, res, mem, "V_max"), peak(u, res, mem, "M_min"), peak(u, res, mem, "M_max"),
+                            peak(u, res, mem, "deflection"));
+                    sb.append(wrap(line, "    "));
+                }
+            } else {
+                String worstM = null, worstD = null;
+                double bm = -1, bd = -1;
+                for (String mem : m.members().keySet()) {
+                    double vm = res.peak(mem, "M_abs").value(), vd = res.peak(mem, "deflection").value();
+                    if (vm > bm) {
+                        bm = vm;
+                        worstM = mem;
+                    }
+                    if (vd > bd) {
+                        bd = vd;
+                        worstD = mem;
+                    }
+                }
+                sb.append(wrap(String.format(Locale.ROOT, "  largest |M| %s %s in %s; largest deflection %s %s in %s",
+                        fmt(u.fromInternal(bm, plumbline.units.Dimension.MOMENT)), mo, worstM,
+                        fmt(u.fromInternal(bd, plumbline.units.Dimension.LENGTH)), len, worstD), "    "));
+            }
+        }
+        sb.append("  (N, V in " + f + "; M in " + mo + "; deflection in " + len + ")\n");
+        return sb.toString();
+    }
+
+    private static String peak(UnitSystem u, plumbline.review.LoadSetResult r, String member, String q) {
+        return fmt(u.fromInternal(r.peak(member, q).value(), plumbline.io.ClaimsReader.dimensionOf(Claim.Kind.MEMBER, q)));
+    }
+
     static String pct(double rel) {
         if (!Double.isFinite(rel)) return "n/a";
         return String.format(Locale.ROOT, rel < 0.001 ? "%.2g%%" : "%.1f%%", rel * 100);
