@@ -655,7 +655,7 @@ public final class ModelReader {
                 }
             }
             if (f.map.entries().isEmpty()) problems.add(new Problem(e.value().at(), path, "no load cases; expected at least one"));
-            out.add(new Combination(e.key(), factors, "user", e.keyAt()));
+            out.add(new Combination(e.key(), factors, "user combination", e.keyAt()));
         }
         return out;
     }
