@@ -38,12 +38,9 @@ public final class ClaimsReader {
     private ClaimsReader() {
     }
 
-    /** The dimension of a claimed quantity. */
+    /** The dimension of a claimed quantity (see {@link Claim#dimensionOf}). */
     public static Dimension dimensionOf(Claim.Kind kind, String quantity) {
-        if (kind == Claim.Kind.REACTION) return quantity.equals("Mz") ? Dimension.MOMENT : Dimension.FORCE;
-        if (kind == Claim.Kind.DISPLACEMENT) return quantity.equals("rz") ? Dimension.ANGLE : Dimension.LENGTH;
-        if (quantity.equals("deflection")) return Dimension.LENGTH;
-        return quantity.startsWith("M") ? Dimension.MOMENT : Dimension.FORCE;
+        return Claim.dimensionOf(kind, quantity);
     }
 
     /** Reads a separate claims file for {@code model}. */

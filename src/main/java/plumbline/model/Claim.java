@@ -21,6 +21,14 @@ public record Claim(Kind item, String name, String combo, String quantity, doubl
         }
     }
 
+    /** The dimension of a claimed quantity: force or moment for reactions and member forces, length or angle else. */
+    public static Dimension dimensionOf(Kind kind, String quantity) {
+        if (kind == Kind.REACTION) return quantity.equals("Mz") ? Dimension.MOMENT : Dimension.FORCE;
+        if (kind == Kind.DISPLACEMENT) return quantity.equals("rz") ? Dimension.ANGLE : Dimension.LENGTH;
+        if (quantity.equals("deflection")) return Dimension.LENGTH;
+        return quantity.startsWith("M") ? Dimension.MOMENT : Dimension.FORCE;
+    }
+
     public String id() {
         String prefix = item == Kind.REACTION ? "R" : item == Kind.MEMBER ? "M" : "D";
         return prefix + "-" + name + "-" + combo + "-" + quantity;

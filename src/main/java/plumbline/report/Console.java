@@ -181,7 +181,7 @@ public final class Console {
     }
 
     private static String peak(UnitSystem u, plumbline.review.LoadSetResult r, String member, String q) {
-        return fmt(u.fromInternal(r.peak(member, q).value(), plumbline.io.ClaimsReader.dimensionOf(Claim.Kind.MEMBER, q)));
+        return fmt(u.fromInternal(r.peak(member, q).value(), Claim.dimensionOf(Claim.Kind.MEMBER, q)));
     }
 
     static String pct(double rel) {

@@ -124,7 +124,7 @@ public final class ResultsTree {
             Map<String, Object> at = new LinkedHashMap<>();
             Map<String, Object> loaded = new LinkedHashMap<>();
             for (String q : PEAKS) {
-                Dimension d = plumbline.io.ClaimsReader.dimensionOf(Claim.Kind.MEMBER, q);
+                Dimension d = Claim.dimensionOf(Claim.Kind.MEMBER, q);
                 LoadSetResult.Peak pk = r.peak(name, q);
                 p.put(q, out(u, pk.value(), d));
                 at.put(q, out(u, pk.xM(), Dimension.LENGTH));
@@ -168,7 +168,7 @@ public final class ResultsTree {
                         gov = s.name();
                     }
                 }
-                one.put(q, map("value", out(u, best, plumbline.io.ClaimsReader.dimensionOf(Claim.Kind.MEMBER, q)), "governing", gov));
+                one.put(q, map("value", out(u, best, Claim.dimensionOf(Claim.Kind.MEMBER, q)), "governing", gov));
             }
             members.put(mem, one);
         }

@@ -108,7 +108,7 @@ final class Diagnosis {
             for (String q : others) {
                 if (q.equals(c.quantity())) continue;
                 Claim alt = with(c, c.name(), q, c.combo());
-                if (!plumbline.io.ClaimsReader.dimensionOf(c.item(), q).equals(c.dimension())) continue;
+                if (!Claim.dimensionOf(c.item(), q).equals(c.dimension())) continue;
                 double v = Review.of(here, alt).value();
                 hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s matches the computed %s of the same %s (%s %s): "
                         + "components or quantities swapped", what, q, c.item() == Claim.Kind.MEMBER ? "member" : "node",
