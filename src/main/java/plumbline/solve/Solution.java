@@ -16,4 +16,18 @@ public record Solution(String name, Map<String, double[]> displacements, Map<Str
         reactions = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(reactions));
         members = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(members));
     }
+
+    /**
+     * Solutions are compared by identity: one is a computed state, used as a key when load
+     * sets are superposed, and hashing its maps would cost as much as forming them.
+     */
+    @Override
+    public boolean equals(Object o) {
+        return this == o;
+    }
+
+    @Override
+    public int hashCode() {
+        return System.identityHashCode(this);
+    }
 }
