@@ -24,7 +24,7 @@ import plumbline.solve.stiffness.StiffnessEngine;
 import plumbline.statics.Determinacy;
 
 @Command(name = "bench", mixinStandardHelpOptions = true,
-        description = "Time each stage on generated models (invented data, for measurement only) and print size against time and peak heap.")
+        description = "Time each stage on generated models (invented data, for measurement only) and print size against time and peak heap (of the check, and of the PDF report after it).")
 final class BenchCommand implements Callable<Integer> {
 
     @Spec
@@ -62,11 +62,12 @@ final class BenchCommand implements Callable<Integer> {
             return Main.INPUT;
         }
         out.printf(Locale.ROOT, "%s models; times in seconds (best of %d); peak heap in MiB%n", kind, repeat);
-        out.printf(Locale.ROOT, "%8s %7s %7s %7s %7s %9s %7s%n", "members", "read", "statics", "stiff", "force", "check+json", "heap");
+        out.printf(Locale.ROOT, "%8s %7s %7s %7s %7s %10s %7s %7s %7s%n", "members", "read", "statics", "stiff", "force", "check+json",
+                "pdf", "heap", "pdfheap");
         for (int n : sizes) {
             String text = model(kind, n);
-            double[] best = {1e9, 1e9, 1e9, 1e9, 1e9};
-            long heap = 0;
+            double[] best = {1e9, 1e9, 1e9, 1e9, 1e9, 1e9};
+            long heap = 0, pdfHeap = 0;
             int members = 0;
             for (int r = 0; r < repeat; r++) {
                 System.gc();
@@ -92,14 +93,21 @@ final class BenchCommand implements Callable<Integer> {
                 byte[] json = OutputFiles.json(ResultsTree.of(rv, new ResultsTree.Inputs(List.of("bench.yaml"), List.of("unreadable")),
                         a.primaryEngine(), null));
                 long t5 = System.nanoTime();
+                heap = Math.max(heap, peakHeap());
+                resetPeaks();
+                byte[] pdf = plumbline.report.PdfReport.render(rv, new ResultsTree.Inputs(List.of("bench.yaml"), List.of("unreadable")),
+                        null, List.of(), java.time.LocalDate.now());
+                long t6 = System.nanoTime();
+                if (pdf.length == 0) throw new IllegalStateException("no report");
                 if (!s.stable() || json.length == 0) throw new IllegalStateException("benchmark model did not solve");
                 members = m.members().size();
-                double[] t = {(t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, force, (t5 - t4) / 1e9 + (t1 - t0) / 1e9};
-                for (int k = 0; k < 5; k++) best[k] = Math.min(best[k], Double.isNaN(t[k]) ? 1e9 : t[k]);
-                heap = Math.max(heap, peakHeap());
+                double[] t = {(t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9, force, (t5 - t4) / 1e9 + (t1 - t0) / 1e9, (t6 - t5) / 1e9};
+                for (int k = 0; k < 6; k++) best[k] = Math.min(best[k], Double.isNaN(t[k]) ? 1e9 : t[k]);
+                pdfHeap = Math.max(pdfHeap, peakHeap());
             }
-            out.printf(Locale.ROOT, "%8d %7.3f %7.3f %7.3f %7s %9.3f %7d%n", members, best[0], best[1], best[2],
-                    best[3] >= 1e9 ? "not run" : String.format(Locale.ROOT, "%.3f", best[3]), best[4], heap >> 20);
+            out.printf(Locale.ROOT, "%8d %7.3f %7.3f %7.3f %7s %10.3f %7.3f %7d %7d%n", members, best[0], best[1], best[2],
+                    best[3] >= 1e9 ? "not run" : String.format(Locale.ROOT, "%.3f", best[3]), best[4], best[5], heap >> 20,
+                    pdfHeap >> 20);
         }
         out.println("force: dense up to " + ForceEngine.DENSE_LIMIT + " node equations, then closed-ring self-stress states (sparse)");
         if (forceNote != null) out.println("force not run on some sizes: " + forceNote);
