@@ -62,7 +62,7 @@ public final class Determinacy {
      * reverse Cuthill-McKee node order) instead of a dense SVD, whose cost grows as the
      * cube of the size.
      */
-    public static final int DENSE_LIMIT = 600;
+    public static final int DENSE_LIMIT = 200;
     /**
      * Zero-pivot threshold of the sparse path, relative to the original diagonal of A A^T.
      * Its pivots are squares of singular-value-like quantities, so 1e-12 here corresponds
