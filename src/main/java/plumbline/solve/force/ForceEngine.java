@@ -58,7 +58,7 @@ public final class ForceEngine implements Engine {
      * structure, LU of the primary equilibrium matrix): cost grows as the cube of the
      * number of node equations. Above this many it is not run.
      */
-    public static final int DENSE_LIMIT = 1100;
+    public static final int DENSE_LIMIT = 400;
     /** When the sparse path declines, the dense one is still tried up to this many equations (some seconds). */
     public static final int DENSE_FALLBACK_LIMIT = 1600;
     /** Above this many node equations even the sparse path is not run (memory of its ring states). */
