@@ -77,13 +77,9 @@ final class Run {
         }
         Review r = Review.of(a, new TolerancePolicy(tolerance), new StiffnessEngine());
         String shown = a.primaryEngine();
-        Double agreement = null;
+        Double agreement = r.safeguards().agreement();
         for (var e : a.engines().values()) {
             if (e.declined()) notes.add(e.engine() + " method not run: " + e.instability() + "; the results are the other method's alone");
-        }
-        if (a.solutions().containsKey("stiffness") && a.solutions().containsKey("force")) {
-            agreement = plumbline.review.Agreement.maxRelativeDifference(in.model, a.engines().get("stiffness").cases(),
-                    a.engines().get("force").cases());
         }
         byte[] report = null;
         if (pdf != null) {
@@ -134,7 +130,6 @@ final class Run {
         if (json != null) out.println("Results written to " + json);
         if (pdf != null) out.println("Report written to " + pdf);
         if (pictures != null) out.println(pictures.size() + " figures written to " + figures);
-        if (!a.stable()) return Main.FLAGGED;
-        return r.verdict().equals("ok") ? Main.OK : Main.FLAGGED;
+        return r.verdict().flagged ? Main.FLAGGED : Main.OK;
     }
 }

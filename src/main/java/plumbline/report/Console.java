@@ -7,6 +7,7 @@ import plumbline.model.Claim;
 import plumbline.model.Model;
 import plumbline.review.ClaimResult;
 import plumbline.review.Review;
+import plumbline.review.Verdict;
 import plumbline.statics.ClaimedEquilibrium;
 import plumbline.statics.Determinacy;
 import plumbline.units.UnitSystem;
@@ -47,6 +48,10 @@ public final class Console {
         UnitSystem u = m.units();
         StringBuilder sb = new StringBuilder();
         sb.append("Plumbline ").append(ResultsTree.TOOL_VERSION).append(" independent check\n");
+        if (r.verdict() == Verdict.ENGINES_DISAGREE || r.verdict() == Verdict.UNBALANCED) {
+            // a failed safeguard is said before anything else: no number below can be vouched for
+            sb.append(wrap("VERDICT " + r.verdict().word.toUpperCase(Locale.ROOT) + ": " + r.verdict().meaning(), "  "));
+        }
         if (!m.job().title().isEmpty()) sb.append(wrap("Job: " + m.job().title(), "  "));
         sb.append(wrap("Model: " + m.file() + " (" + m.nodes().size() + " nodes, " + m.members().size() + " members, "
                 + m.loadCases().size() + " load cases, " + m.combinations().size() + (m.combinations().size() == 1 ? " combination)" : " combinations)"), "  "));
@@ -56,12 +61,13 @@ public final class Console {
             else if (!v.stable()) sb.append(wrap(k + " method: " + v.instability(), "  "));
         });
         if (r.analysis().stable()) {
-            double worst = 0;
-            String primary = r.analysis().primaryEngine();
-            for (var s : r.analysis().solutions().get(primary).values()) worst = Math.max(worst, s.equilibriumResidual());
-            sb.append(wrap(String.format(Locale.ROOT, "Solved by: %s; equilibrium residual at most %.1e of the load", engines, worst), "  "));
-            if (agreement != null) {
-                sb.append(String.format(Locale.ROOT, "Engines agree to %.1e (largest relative difference)%n", agreement));
+            var g = r.safeguards();
+            sb.append(wrap(String.format(Locale.ROOT, "Solved by: %s; equilibrium residual at most %.1e of the load (limit %.0e)%s",
+                    engines, g.worstResidual(), plumbline.solve.Equilibrium.TOLERANCE,
+                    g.balanced() ? "" : ": OUT OF BALANCE in " + g.worstResidualAt()), "  "));
+            if (g.agreement() != null) {
+                sb.append(wrap(String.format(Locale.ROOT, "Engines %s to %.1e (largest relative difference; limit %.0e)",
+                        g.enginesAgree() ? "agree" : "DISAGREE", g.agreement(), plumbline.review.Agreement.TOLERANCE), "  "));
             }
         }
         if (!r.equilibrium().isEmpty()) sb.append("Equilibrium of claimed reactions:\n");
@@ -114,7 +120,8 @@ public final class Console {
                 sb.append(wrap("  " + w.subject() + ": " + w.message(), "    "));
             }
         }
-        sb.append("Verdict: ").append(r.verdict().toUpperCase(Locale.ROOT)).append('\n');
+        sb.append("Verdict: ").append(r.verdict().word.toUpperCase(Locale.ROOT)).append('\n');
+        sb.append(wrap("  " + r.verdict().meaning(), "  "));
         sb.append(wrap("Caution: an independent check of a simplified linear-elastic model; it does not replace the "
                 + "engineer of record, licensed review or local codes.", "  "));
         return sb.toString();

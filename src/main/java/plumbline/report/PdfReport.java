@@ -30,7 +30,9 @@ import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
 import plumbline.model.LoadCase;
 import plumbline.model.Model;
+import plumbline.review.Agreement;
 import plumbline.review.Analysis;
+import plumbline.solve.Equilibrium;
 import plumbline.review.ClaimResult;
 import plumbline.review.LoadSet;
 import plumbline.review.LoadSetResult;
@@ -262,10 +264,11 @@ public final class PdfReport {
         heading(doc, "1  Summary");
         long ok = count(ClaimResult.Status.OK), mg = count(ClaimResult.Status.MARGINAL), mm = count(ClaimResult.Status.MISMATCH);
         Paragraph v = new Paragraph();
-        v.add(new Chunk("Verdict: " + review.verdict().toUpperCase(Locale.ROOT), FontFactory.getFont(FontFactory.HELVETICA_BOLD, 13, INK)));
+        v.add(new Chunk("Verdict: " + review.verdict().word.toUpperCase(Locale.ROOT), FontFactory.getFont(FontFactory.HELVETICA_BOLD, 13, INK)));
         v.add(new Chunk(String.format(Locale.ROOT, "      %d claims: %d ok, %d marginal, %d mismatch", ok + mg + mm, ok, mg, mm), body));
-        v.setSpacingAfter(4);
+        v.setSpacingAfter(2);
         doc.add(v);
+        para(doc, "The verdict means: " + review.verdict().meaning(), review.verdict().flagged ? bold : body);
         Determinacy.Result d = review.analysis().determinacy();
         para(doc, "Statics: " + d.classification().word + (d.classification() == Determinacy.Classification.INDETERMINATE
                 ? " to degree " + d.degree() : "") + (d.mechanisms() > 0 ? ", " + d.mechanisms() + " mechanism(s)" : "")
@@ -299,11 +302,12 @@ public final class PdfReport {
     private String solvedLine() {
         Analysis a = review.analysis();
         if (!a.stable()) return "The model cannot carry load as given; no engine results.";
-        double worst = 0;
-        for (LoadSetResult r : a.solutions().get(a.primaryEngine()).values()) worst = Math.max(worst, r.equilibriumResidual());
+        Review.Safeguards g = review.safeguards();
         String s = "Solved by the " + String.join(" and the ", a.solutions().keySet()) + " method"
-                + (a.solutions().size() > 1 ? "s" : "") + String.format(Locale.ROOT, "; equilibrium residual at most %.1e of the load", worst);
-        if (agreement != null) s += String.format(Locale.ROOT, "; the two methods agree to %.1e", agreement);
+                + (a.solutions().size() > 1 ? "s" : "") + String.format(Locale.ROOT, "; equilibrium residual at most %.1e of the load "
+                + "(limit %.0e%s)", g.worstResidual(), Equilibrium.TOLERANCE, g.balanced() ? "" : ", exceeded in " + g.worstResidualAt());
+        if (agreement != null) s += String.format(Locale.ROOT, "; the two methods agree to %.1e (limit %.0e%s)", agreement,
+                Agreement.TOLERANCE, g.enginesAgree() ? "" : ": they DISAGREE");
         for (String n : notes) s += ". " + n;
         return s + ".";
     }

@@ -10,7 +10,9 @@ import plumbline.review.Analysis;
 import plumbline.review.ClaimResult;
 import plumbline.review.LoadSet;
 import plumbline.review.LoadSetResult;
+import plumbline.review.Agreement;
 import plumbline.review.Review;
+import plumbline.solve.Equilibrium;
 import plumbline.solve.Solution;
 import plumbline.statics.ClaimedEquilibrium;
 import plumbline.statics.Determinacy;
@@ -67,7 +69,12 @@ public final class ResultsTree {
             engines.put(k, e);
         });
         root.put("engines", engines);
-        root.put("agreement", agreement == null ? null : map("max_relative_difference", num(agreement)));
+        root.put("agreement", agreement == null ? null : map("max_relative_difference", num(agreement),
+                "tolerance", Agreement.TOLERANCE, "agree", agreement <= Agreement.TOLERANCE));
+        Review.Safeguards g = review.safeguards();
+        root.put("safeguards", map("equilibrium_residual", num(g.worstResidual()), "equilibrium_tolerance", Equilibrium.TOLERANCE,
+                "balanced", g.balanced(), "worst_at", g.worstResidualAt(), "agreement_tolerance", Agreement.TOLERANCE,
+                "engines_agree", g.enginesAgree()));
         List<Object> claims = new ArrayList<>();
         for (ClaimResult r : review.claims()) claims.add(claim(u, r));
         root.put("claims", claims);
@@ -77,7 +84,7 @@ public final class ResultsTree {
         List<Object> warn = new ArrayList<>();
         for (var w : review.warnings()) warn.add(map("subject", w.subject(), "message", w.message(), "rule", w.rule()));
         root.put("warnings", warn);
-        root.put("verdict", review.verdict());
+        root.put("verdict", review.verdict().word);
         return root;
     }
 

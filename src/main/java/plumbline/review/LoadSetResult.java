@@ -34,6 +34,9 @@ public sealed interface LoadSetResult {
     /** The state drawn and listed for the set: the solution itself, or every patterned load on. */
     Solution representative();
 
+    /** Every solved state the set is made of (the one state, or the fixed part, each pattern part and all on). */
+    List<Solution> solutions();
+
     /** A member peak, where it occurs, and (for an envelope) the members whose loads are on. */
     record Peak(double value, double xM, List<String> loadedMembers) {
     }
@@ -63,6 +66,10 @@ public sealed interface LoadSetResult {
 
         public double equilibriumResidual() {
             return solution.equilibriumResidual();
+        }
+
+        public List<Solution> solutions() {
+            return List.of(solution);
         }
 
         public Solution representative() {
@@ -148,6 +155,14 @@ public sealed interface LoadSetResult {
             double w = fixed.equilibriumResidual();
             for (Part p : parts) w = Math.max(w, p.solution().equilibriumResidual());
             return Math.max(w, allOn.equilibriumResidual());
+        }
+
+        public List<Solution> solutions() {
+            List<Solution> out = new ArrayList<>();
+            out.add(fixed);
+            for (Part p : parts) out.add(p.solution());
+            out.add(allOn);
+            return out;
         }
 
         public Solution representative() {

@@ -15,7 +15,61 @@ import plumbline.validate.Plausibility;
  * unstable. Envelope claims take the most severe value over all combinations.
  */
 public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEquilibrium> equilibrium,
-                     List<Plausibility.Warning> warnings, String verdict) {
+                     List<Plausibility.Warning> warnings, Safeguards safeguards, Verdict verdict) {
+
+    /**
+     * The run's own checks: the largest relative difference between the two methods over
+     * every load case (null when only one ran) and the largest equilibrium residual of any
+     * solution of any engine (load cases, combinations, pattern parts).
+     */
+    public record Safeguards(Double agreement, double worstResidual, String worstResidualAt) {
+        public boolean enginesAgree() {
+            return agreement == null || agreement <= Agreement.TOLERANCE;
+        }
+
+        public boolean balanced() {
+            return worstResidual <= plumbline.solve.Equilibrium.TOLERANCE;
+        }
+
+        static Safeguards of(Analysis a) {
+            Double agreement = null;
+            if (a.solutions().containsKey("stiffness") && a.solutions().containsKey("force")) {
+                agreement = Agreement.maxRelativeDifference(a.engineModel(), a.engines().get("stiffness").cases(),
+                        a.engines().get("force").cases());
+            }
+            double worst = 0;
+            String at = "";
+            for (var e : a.solutions().entrySet()) {
+                for (Solution s : a.engines().get(e.getKey()).cases().values()) {
+                    if (!(s.equilibriumResidual() <= worst)) {
+                        worst = s.equilibriumResidual();
+                        at = e.getKey() + " method, " + s.name();
+                    }
+                }
+                for (LoadSetResult r : e.getValue().values()) {
+                    for (Solution s : r.solutions()) {
+                        if (!(s.equilibriumResidual() <= worst)) {
+                            worst = s.equilibriumResidual();
+                            at = e.getKey() + " method, " + s.name();
+                        }
+                    }
+                }
+            }
+            return new Safeguards(agreement, worst, at);
+        }
+    }
+
+    /** The verdict from the state of the model, the safeguards and the claims' statuses, most severe first. */
+    static Verdict verdict(boolean stable, Safeguards g, List<ClaimResult> claims, boolean claimedReactionsBalance) {
+        if (!stable) return Verdict.UNSTABLE;
+        if (!g.enginesAgree()) return Verdict.ENGINES_DISAGREE;
+        if (!g.balanced()) return Verdict.UNBALANCED;
+        if (claims.stream().anyMatch(r -> r.status() == ClaimResult.Status.MISMATCH)) return Verdict.MISMATCH;
+        if (claims.stream().anyMatch(r -> r.status() == ClaimResult.Status.MARGINAL)) return Verdict.MARGINAL;
+        if (!claimedReactionsBalance) return Verdict.MARGINAL;
+        if (claims.isEmpty()) return Verdict.NO_CLAIMS;
+        return Verdict.OK;
+    }
 
     /** A deflection beyond span/50 under any load set is a slip or a mechanism-like model (common practice). */
     public static final double SPAN_OVER_DEFLECTION_MIN = 50;
@@ -57,12 +111,8 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         Map<String, Map<String, Double>> factors = new java.util.LinkedHashMap<>();
         for (LoadSet s : a.loadSets()) factors.put(s.name(), s.factors());
         List<ClaimedEquilibrium> eq = ClaimedEquilibrium.check(a.model(), factors, ClaimedEquilibrium.DEFAULT_TOLERANCE);
-        String verdict;
-        if (!a.stable()) verdict = "unstable";
-        else if (out.stream().anyMatch(r -> r.status() == ClaimResult.Status.MISMATCH)) verdict = "mismatch";
-        else if (out.stream().anyMatch(r -> r.status() == ClaimResult.Status.MARGINAL)) verdict = "marginal";
-        else verdict = "ok";
-        if (verdict.equals("ok") && eq.stream().anyMatch(e -> !e.balanced())) verdict = "marginal";
+        Safeguards guards = Safeguards.of(a);
+        Verdict verdict = verdict(a.stable(), guards, out, eq.stream().allMatch(ClaimedEquilibrium::balanced));
         List<Plausibility.Warning> warnings = new ArrayList<>(Plausibility.check(a.model()));
         for (var e : a.engines().values()) {
             for (String n : e.notes()) {
@@ -85,7 +135,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 }
             }
         }
-        return new Review(a, out, eq, warnings, verdict);
+        return new Review(a, out, eq, warnings, guards, verdict);
     }
 
     /** A computed value, the load set that governs it, and the members loaded for it (pattern loading). */

@@ -7,6 +7,8 @@ import plumbline.model.Member;
 import plumbline.model.Model;
 import plumbline.model.Node;
 import plumbline.model.NodeLoad;
+import plumbline.model.LoadDirection;
+import plumbline.model.MemberLoad;
 
 /**
  * The equilibrium check run on every solution, whichever engine made it: each member must
@@ -15,6 +17,14 @@ import plumbline.model.NodeLoad;
  * relative to the largest force (moments divided by the model's extent) in play.
  */
 public final class Equilibrium {
+
+    /**
+     * A residual above this fraction of the largest force in play means the solution is not
+     * in equilibrium with the loads as the model gives them: the verdict is {@code unbalanced}.
+     * Correct solutions balance to about 1e-12; a slip in the load description or the end
+     * forces leaves a residual of the order of the load it touches.
+     */
+    public static final double TOLERANCE = 1e-6;
 
     private Equilibrium() {
     }
@@ -34,45 +44,53 @@ public final class Equilibrium {
         return out;
     }
 
-    public static double residual(Model model, Solution s, Map<String, double[]> nodeLoads) {
+    /**
+     * The largest imbalance of solution {@code s} under the load cases {@code factors} (case
+     * name to factor), relative to the largest force in play (moments divided by the model's
+     * extent). Each member's loads are resolved here straight from the model's load records
+     * (global components, positions along the member, per-plan intensities, self-weight), by
+     * code of its own, so a slip in the load description the engines share shows as an
+     * imbalance rather than being balanced by both engines alike.
+     */
+    public static double residual(Model model, Solution s, Map<String, Double> factors) {
         double lc = model.extentM();
+        Map<String, double[]> memberLoads = memberLoadResultants(model, factors);
         Map<String, double[]> sum = new HashMap<>();
         double scale = 0, worst = 0;
-        for (var e : nodeLoads.entrySet()) {
+        for (var e : nodeLoads(model, factors).entrySet()) {
             double[] a = sum.computeIfAbsent(e.getKey(), k -> new double[3]);
             for (int i = 0; i < 3; i++) a[i] += e.getValue()[i];
-            scale = Math.max(scale, Math.max(Math.hypot(e.getValue()[0], e.getValue()[1]), Math.abs(e.getValue()[2]) / lc));
+            scale = Math.max(scale, magnitude(e.getValue(), lc));
         }
         for (var e : s.reactions().entrySet()) {
             double[] a = sum.computeIfAbsent(e.getKey(), k -> new double[3]);
             for (int i = 0; i < 3; i++) a[i] += e.getValue()[i];
-            scale = Math.max(scale, Math.max(Math.hypot(e.getValue()[0], e.getValue()[1]), Math.abs(e.getValue()[2]) / lc));
+            scale = Math.max(scale, magnitude(e.getValue(), lc));
         }
-        double[] memberResidual = new double[s.members().size()];
-        int idx = 0;
         for (var e : s.members().entrySet()) {
             Member m = model.member(e.getKey());
-            MemberSolution ms = e.getValue();
-            double[] f = ms.endForcesLocal();
-            double[] d = MemberActions.direction(model, m);
-            double cx = d[0], cy = d[1], len = model.lengthM(m);
-            double[] r = ms.actions().resultantAboutStart();
-            double rx = f[0] + f[3] + r[0], ry = f[1] + f[4] + r[1], rm = f[2] + f[5] + f[4] * len + r[2];
-            memberResidual[idx++] = Math.max(Math.hypot(rx, ry), Math.abs(rm) / lc);
-            scale = Math.max(scale, Math.max(Math.max(Math.hypot(f[0], f[1]), Math.hypot(f[3], f[4])),
-                    Math.max(Math.abs(f[2]), Math.abs(f[5])) / lc));
-            scale = Math.max(scale, Math.max(Math.hypot(r[0], r[1]), Math.abs(r[2]) / lc));
+            Node a = model.node(m.from()), b = model.node(m.to());
+            double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
+            double cx = dx / len, cy = dy / len;
+            double[] f = e.getValue().endForcesLocal();
+            // end forces on the member, local {fx, fy} turned to global {gx, gy} = {fx cx - fy cy, fx cy + fy cx}
+            double[] gi = {f[0] * cx - f[1] * cy, f[0] * cy + f[1] * cx, f[2]};
+            double[] gj = {f[3] * cx - f[4] * cy, f[3] * cy + f[4] * cx, f[5]};
+            double[] load = memberLoads.getOrDefault(m.name(), new double[3]);
+            // the member balances: forces, and moments about its start (the end force acts at dx, dy)
+            double rx = gi[0] + gj[0] + load[0], ry = gi[1] + gj[1] + load[1];
+            double rm = gi[2] + gj[2] + dx * gj[1] - dy * gj[0] + load[2];
+            worst = Math.max(worst, Math.max(Math.hypot(rx, ry), Math.abs(rm) / lc));
+            scale = Math.max(scale, Math.max(magnitude(gi, lc), magnitude(gj, lc)));
+            scale = Math.max(scale, magnitude(load, lc));
             // the member pushes on its nodes with the opposite of the forces on its ends
             double[] ai = sum.computeIfAbsent(m.from(), k -> new double[3]);
-            ai[0] -= f[0] * cx - f[1] * cy;
-            ai[1] -= f[0] * cy + f[1] * cx;
-            ai[2] -= f[2];
             double[] aj = sum.computeIfAbsent(m.to(), k -> new double[3]);
-            aj[0] -= f[3] * cx - f[4] * cy;
-            aj[1] -= f[3] * cy + f[4] * cx;
-            aj[2] -= f[5];
+            for (int i = 0; i < 3; i++) {
+                ai[i] -= gi[i];
+                aj[i] -= gj[i];
+            }
         }
-        for (double v : memberResidual) worst = Math.max(worst, v);
         // A floor for load cases that strain nothing (a settlement of a determinate structure):
         // forces below 1e-5 of those that would strain the stiffest member by the
         // largest displacement over the model's extent are rounding, not imbalance.
@@ -80,12 +98,81 @@ public final class Equilibrium {
         for (Member m : model.members().values()) ea = Math.max(ea, model.materialOf(m).ePa() * model.sectionOf(m).areaM2());
         for (double[] d : s.displacements().values()) u = Math.max(u, Math.hypot(d[0], d[1]));
         scale = Math.max(scale, Math.max(1e-12 * ea, 1e-5 * ea * u / lc));
-        for (var e : sum.entrySet()) {
-            double[] a = e.getValue();
-            worst = Math.max(worst, Math.max(Math.hypot(a[0], a[1]), Math.abs(a[2]) / lc));
-        }
+        for (double[] a : sum.values()) worst = Math.max(worst, magnitude(a, lc));
         if (scale == 0) return worst == 0 ? 0 : 1;
         return worst / scale;
     }
 
+    private static double magnitude(double[] forceAndMoment, double lengthScaleM) {
+        return Math.max(Math.hypot(forceAndMoment[0], forceAndMoment[1]), Math.abs(forceAndMoment[2]) / lengthScaleM);
+    }
+
+    /**
+     * The resultant of every member's loads under the factored cases, global {Fx, Fy} (N) and
+     * the moment about the member's start (N*m, counter-clockwise), from the model's load
+     * records. A load of intensity w along unit direction (ux, uy), at distance s from the start
+     * along the member's unit vector (cx, cy), has the moment s (cx uy - cy ux) w about it.
+     * Linear intensities are integrated by the trapezoid rule (force) and Simpson's rule
+     * (moment: w(s) s is quadratic), both exact here.
+     */
+    static Map<String, double[]> memberLoadResultants(Model model, Map<String, Double> factors) {
+        Map<String, double[]> out = new HashMap<>();
+        for (var f : factors.entrySet()) {
+            LoadCase c = model.loadCase(f.getKey());
+            double k = f.getValue();
+            if (k == 0) continue;
+            for (MemberLoad l : c.memberLoads()) {
+                Member m = model.member(l.member());
+                double[] u = unitVector(model, m);
+                double[] r = out.computeIfAbsent(m.name(), x -> new double[3]);
+                if (l instanceof MemberLoad.Distributed w) {
+                    double[] g = globalDirection(w.dir(), u);
+                    double perLength = w.perPlan() ? Math.abs(u[0]) : 1.0; // per plan: |cx| as much per member length
+                    double w1 = k * perLength * w.w1NPerM(), w2 = k * perLength * w.w2NPerM();
+                    double a = w.fromM(), b = w.toM(), mid = 0.5 * (a + b);
+                    double force = 0.5 * (w1 + w2) * (b - a);
+                    double firstMoment = (b - a) / 6 * (w1 * a + 4 * (0.5 * (w1 + w2)) * mid + w2 * b);
+                    r[0] += force * g[0];
+                    r[1] += force * g[1];
+                    r[2] += firstMoment * (u[0] * g[1] - u[1] * g[0]);
+                } else if (l instanceof MemberLoad.Point p) {
+                    double[] g = globalDirection(p.dir(), u);
+                    double force = k * p.forceN();
+                    r[0] += force * g[0];
+                    r[1] += force * g[1];
+                    r[2] += p.atM() * force * (u[0] * g[1] - u[1] * g[0]);
+                } else if (l instanceof MemberLoad.Couple cp) {
+                    r[2] += k * cp.momentNm();
+                }
+            }
+            if (c.selfWeight()) {
+                for (Member m : model.members().values()) {
+                    double w = k * model.materialOf(m).weightDensityNPerM3() * model.sectionOf(m).areaM2();
+                    if (w == 0) continue;
+                    double len = model.lengthM(m), cx = unitVector(model, m)[0];
+                    double[] r = out.computeIfAbsent(m.name(), x -> new double[3]);
+                    r[1] -= w * len;              // downward, acting at mid-length
+                    r[2] -= w * len * cx * len / 2; // moment about the start: (L/2) cx times -wL
+                }
+            }
+        }
+        return out;
+    }
+
+    private static double[] unitVector(Model model, Member m) {
+        Node a = model.node(m.from()), b = model.node(m.to());
+        double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
+        return new double[]{dx / len, dy / len};
+    }
+
+    /** The global unit vector of a load direction on a member of unit vector u. */
+    private static double[] globalDirection(LoadDirection d, double[] u) {
+        return switch (d) {
+            case X -> new double[]{1, 0};
+            case Y -> new double[]{0, 1};
+            case GRAVITY -> new double[]{0, -1};
+            case LOCAL_X -> new double[]{u[0], u[1]};
+            case LOCAL_Y -> new double[]{-u[1], u[0]};
+        };
+    }
 }

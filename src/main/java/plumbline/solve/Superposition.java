@@ -43,7 +43,7 @@ public final class Superposition {
         Map<String, Double> factors = new LinkedHashMap<>();
         for (var p : parts.entrySet()) factors.merge(p.getKey().name(), p.getValue(), Double::sum);
         Solution s = new Solution(name, disp, reac, members, 0);
-        residual = Equilibrium.residual(model, s, Equilibrium.nodeLoads(model, factors));
+        residual = Equilibrium.residual(model, s, factors);
         return new Solution(name, disp, reac, members, residual);
     }
 

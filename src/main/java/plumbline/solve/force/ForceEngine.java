@@ -370,7 +370,7 @@ public final class ForceEngine implements Engine {
             members.put(mem.name(), MemberSolution.of(ends.get(mem.name()), a, ei, vi, vj));
         }
         Solution s = new Solution(c.name(), disp, reactions, members, 0);
-        double res = Equilibrium.residual(model, s, Equilibrium.nodeLoads(model, Map.of(c.name(), 1.0)));
+        double res = Equilibrium.residual(model, s, Map.of(c.name(), 1.0));
         return new Solution(c.name(), disp, reactions, members, res);
     }
 

@@ -247,7 +247,7 @@ public final class StiffnessEngine implements Engine {
             disp.put(nodes.get(n).name(), new double[]{u[n][0] * cs - u[n][1] * sn, u[n][0] * sn + u[n][1] * cs, u[n][2]});
         }
         Solution s = new Solution(c.name(), disp, reactions, members, 0);
-        double residual = Equilibrium.residual(model, s, Equilibrium.nodeLoads(model, Map.of(c.name(), 1.0)));
+        double residual = Equilibrium.residual(model, s, Map.of(c.name(), 1.0));
         return new Solution(c.name(), disp, reactions, members, residual);
     }
 
