@@ -10,6 +10,7 @@ import plumbline.model.MemberLoad;
 import plumbline.model.Model;
 import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
+import plumbline.solve.MemberFunctions;
 import plumbline.solve.Solution;
 import plumbline.solve.Superposition;
 import plumbline.statics.Determinacy;
@@ -70,21 +71,21 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
                 results.put(e.name(), r);
                 if (!r.stable()) continue;
                 Map<String, LoadSetResult> byName = new LinkedHashMap<>();
-                for (LoadSet s : sets) byName.put(s.name(), result(model, em, r, s));
+                for (LoadSet s : sets) byName.put(s.name(), result(model, em, r, s, e.memberFunctions()));
                 sols.put(e.name(), byName);
             }
         }
         return new Analysis(model, em, det, sets, results, sols);
     }
 
-    private static LoadSetResult result(Model model, Model em, EngineResult r, LoadSet s) {
+    private static LoadSetResult result(Model model, Model em, EngineResult r, LoadSet s, MemberFunctions fn) {
         boolean patterned = s.factors().keySet().stream().anyMatch(c -> model.loadCase(c).pattern());
         if (!patterned) {
             Solution bare = r.cases().get(s.name()); // a load case on its own needs no superposition
             if (bare != null && !s.combination()) return new LoadSetResult.Plain(bare);
             Map<Solution, Double> parts = new LinkedHashMap<>();
             for (var f : s.factors().entrySet()) parts.put(r.cases().get(f.getKey()), f.getValue());
-            return new LoadSetResult.Plain(Superposition.combine(em, s.name(), parts));
+            return new LoadSetResult.Plain(Superposition.combine(em, s.name(), parts, fn));
         }
         Map<Solution, Double> fixed = new LinkedHashMap<>(), all = new LinkedHashMap<>();
         List<LoadSetResult.Part> parts = new ArrayList<>();
@@ -96,12 +97,12 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
                 if (!c.getKey().startsWith(f.getKey() + PART)) continue;
                 String member = c.getKey().substring(f.getKey().length() + PART.length());
                 parts.add(new LoadSetResult.Part(member, Superposition.combine(em, s.name() + PART + member,
-                        Map.of(c.getValue(), f.getValue()))));
+                        Map.of(c.getValue(), f.getValue()), fn)));
                 all.put(c.getValue(), f.getValue());
             }
         }
-        return new LoadSetResult.Pattern(s.name(), Superposition.combine(em, s.name(), fixed), parts,
-                Superposition.combine(em, s.name(), all));
+        return new LoadSetResult.Pattern(s.name(), Superposition.combine(em, s.name(), fixed, fn), parts,
+                Superposition.combine(em, s.name(), all, fn));
     }
 
     public boolean stable() {

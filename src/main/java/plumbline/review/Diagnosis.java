@@ -157,7 +157,8 @@ final class Diagnosis {
                 if (s.factors().keySet().stream().anyMatch(k -> m.loadCase(k).pattern())) continue;
                 Map<plumbline.solve.Solution, Double> parts = new LinkedHashMap<>();
                 for (var f : s.factors().entrySet()) parts.put(er.cases().get(f.getKey()), f.getValue());
-                plumbline.solve.Solution sol = plumbline.solve.Superposition.combine(a.engineModel(), s.name(), parts);
+                plumbline.solve.Solution sol = plumbline.solve.Superposition.combine(a.engineModel(), s.name(), parts,
+                        plumbline.solve.MemberFunctions.SHARED);
                 double v = Review.of(new LoadSetResult.Plain(sol), c).value();
                 hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the allowable-stress combination %s "
                         + "(%s %s): ASD (service-level) loads against a strength combination", what, s.name(),

@@ -34,8 +34,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         static Safeguards of(Analysis a) {
             Double agreement = null;
             if (a.solutions().containsKey("stiffness") && a.solutions().containsKey("force")) {
-                agreement = Agreement.maxRelativeDifference(a.engineModel(), a.engines().get("stiffness").cases(),
-                        a.engines().get("force").cases());
+                agreement = Agreement.maxRelativeDifference(a.engineModel(), everySolution(a, "stiffness"), everySolution(a, "force"));
             }
             double worst = 0;
             String at = "";
@@ -56,6 +55,16 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 }
             }
             return new Safeguards(agreement, worst, at);
+        }
+
+        /** Every state an engine's numbers come from: its load cases and each solution of each load set. */
+        private static Map<String, Solution> everySolution(Analysis a, String engine) {
+            Map<String, Solution> out = new java.util.LinkedHashMap<>(a.engines().get(engine).cases());
+            for (var e : a.solutions().get(engine).entrySet()) {
+                List<Solution> parts = e.getValue().solutions();
+                for (int i = 0; i < parts.size(); i++) out.put("set " + e.getKey() + " #" + i, parts.get(i));
+            }
+            return out;
         }
     }
 

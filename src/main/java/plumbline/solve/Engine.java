@@ -9,4 +9,7 @@ public interface Engine {
 
     /** Solves every load case of the model, unfactored. */
     EngineResult solve(Model model);
+
+    /** How this engine forms member functions and peaks; combinations of its solutions use the same. */
+    MemberFunctions memberFunctions();
 }

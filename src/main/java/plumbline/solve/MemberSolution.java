@@ -15,6 +15,17 @@ public record MemberSolution(double[] endForcesLocal, double vStartM, double vEn
         return new MemberSolution(endForcesLocal.clone(), vStartM, vEndM, actions, r, r.peaks());
     }
 
+    /**
+     * A member state whose peaks an engine found by its own code; the shared functions are
+     * still formed for drawings and pattern envelopes.
+     */
+    public static MemberSolution withPeaks(double[] endForcesLocal, MemberActions actions, double eiNm2, double vStartM,
+                                           double vEndM, Peaks peaks) {
+        MemberResponse r = MemberResponse.of(new double[]{endForcesLocal[0], endForcesLocal[1], endForcesLocal[2]},
+                actions, eiNm2, vStartM, vEndM);
+        return new MemberSolution(endForcesLocal.clone(), vStartM, vEndM, actions, r, peaks);
+    }
+
     @Override
     public double[] endForcesLocal() {
         return endForcesLocal.clone();

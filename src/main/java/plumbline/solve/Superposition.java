@@ -16,7 +16,11 @@ public final class Superposition {
     private Superposition() {
     }
 
-    public static Solution combine(Model model, String name, Map<Solution, Double> parts) {
+    /**
+     * @param functions the engine's own member functions, so that the peaks of a combination
+     *                  come from the same code as those of its load cases
+     */
+    public static Solution combine(Model model, String name, Map<Solution, Double> parts, MemberFunctions functions) {
         Map<String, double[]> disp = new LinkedHashMap<>(), reac = new LinkedHashMap<>();
         for (var p : parts.entrySet()) {
             add(disp, p.getKey().displacements(), p.getValue());
@@ -38,7 +42,7 @@ public final class Superposition {
                 ve += k * s.vEndM();
                 if (k != 0) a = a.plus(s.actions().scaled(k));
             }
-            members.put(m.name(), MemberSolution.of(f, a, bendingStiffness(model, m), vs, ve));
+            members.put(m.name(), functions.solve(f, a, bendingStiffness(model, m), vs, ve));
         }
         Map<String, Double> factors = new LinkedHashMap<>();
         for (var p : parts.entrySet()) factors.merge(p.getKey().name(), p.getValue(), Double::sum);

@@ -24,7 +24,7 @@ import plumbline.statics.Determinacy;
 class SparseForceTest {
 
     static void agreeOrDecline(Model m, String what, int[] counts) {
-        EngineResult f = ForceEngine.solveSparse(m);
+        EngineResult f = new ForceEngine().solveSparse(m);
         if (f.declined()) {
             counts[1]++;
             return;

@@ -5,8 +5,6 @@ import plumbline.model.Member;
 import plumbline.model.Model;
 import plumbline.model.Support;
 import plumbline.solve.MemberActions;
-import plumbline.solve.MemberResponse;
-import plumbline.solve.Poly;
 import plumbline.statics.EquilibriumMatrix;
 
 /**
@@ -112,18 +110,25 @@ final class Flexibility {
             double ea = model.materialOf(m).ePa() * model.sectionOf(m).areaM2();
             double ei = model.materialOf(m).ePa() * model.sectionOf(m).inertiaM4();
             double[] fp = released.get(u.owner());
-            MemberResponse r = MemberResponse.of(new double[]{fp[0], fp[1], fp[2]}, a, Double.NaN, 0, 0);
-            Poly unit;
+            // the released member's own diagrams in closed form, integrated exactly against the unit diagrams
+            ClosedFormMember r = ClosedFormMember.of(new double[]{fp[0], fp[1], fp[2]}, a);
+            double alpha, beta; // unit end-moment diagram m(x) = alpha + beta x
             switch (u.kind()) {
                 case AXIAL -> {
-                    e[j] = ForceEngine.integrate(r.axial(), new Poly(1)) / ea + a.thermalStrain() * len;
+                    e[j] = r.axialIntegral() / ea + a.thermalStrain() * len;
                     continue;
                 }
-                case MOMENT_START -> unit = new Poly(-1, 1 / len);
-                default -> unit = new Poly(0, 1 / len);
+                case MOMENT_START -> {
+                    alpha = -1;
+                    beta = 1 / len;
+                }
+                default -> {
+                    alpha = 0;
+                    beta = 1 / len;
+                }
             }
-            double bending = Double.isFinite(ei) && ei > 0 ? ForceEngine.integrate(r.moment(), unit) / ei : 0;
-            e[j] = bending + a.thermalCurvaturePerM() * unit.integrate(len);
+            double bending = Double.isFinite(ei) && ei > 0 ? r.momentIntegral(alpha, beta) / ei : 0;
+            e[j] = bending + a.thermalCurvaturePerM() * (alpha * len + beta * len * len / 2);
         }
         return e;
     }

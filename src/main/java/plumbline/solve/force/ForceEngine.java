@@ -22,9 +22,10 @@ import plumbline.solve.EngineResult;
 import plumbline.solve.ForceWorking;
 import plumbline.solve.Equilibrium;
 import plumbline.solve.MemberActions;
+import plumbline.solve.MemberFunctions;
+import plumbline.solve.MemberLoading;
+import plumbline.solve.Peaks;
 import plumbline.solve.MemberSolution;
-import plumbline.solve.Piecewise;
-import plumbline.solve.Poly;
 import plumbline.solve.Solution;
 import plumbline.statics.EquilibriumMatrix;
 
@@ -54,7 +55,7 @@ public final class ForceEngine implements Engine {
     static final double INDEPENDENCE_TOLERANCE = 1e-9;
 
     /**
-     * The force engine works on dense matrices (Gram-Schmidt choice of the primary
+     * The force engine works on dense matrices (Gauss-Jordan choice of the primary
      * structure, LU of the primary equilibrium matrix): cost grows as the cube of the
      * number of node equations. Above this many it is not run.
      */
@@ -77,9 +78,34 @@ public final class ForceEngine implements Engine {
         return m;
     }
 
+    private final MemberLoading loading;
+    private final MemberFunctions functions;
+
+    /** The engine as the tool runs it: the shared member loads, and member functions in closed form of its own. */
+    public ForceEngine() {
+        this(MemberLoading.SHARED, ForceEngine::closedForm);
+    }
+
+    /** An engine with the given member loads and functions: the seam through which tests plant slips. */
+    public ForceEngine(MemberLoading loading, MemberFunctions functions) {
+        this.loading = loading;
+        this.functions = functions;
+    }
+
+    /** The member state with the peaks of the force method's own closed-form functions ({@link ClosedFormMember}). */
+    static MemberSolution closedForm(double[] ends, MemberActions a, double eiNm2, double vStartM, double vEndM) {
+        Peaks p = ClosedFormMember.of(new double[]{ends[0], ends[1], ends[2]}, a)
+                .peaks(eiNm2, a.thermalCurvaturePerM(), vStartM, vEndM);
+        return MemberSolution.withPeaks(ends, a, eiNm2, vStartM, vEndM, p);
+    }
+
     /** The sparse path (closed-ring self-stress states) whatever the size, for tests. */
-    public static EngineResult solveSparse(Model model) {
-        return SparseForceMethod.solve(model, EquilibriumMatrix.of(model), "force");
+    public EngineResult solveSparse(Model model) {
+        return SparseForceMethod.solve(model, EquilibriumMatrix.of(model), this);
+    }
+
+    MemberLoading loading() {
+        return loading;
     }
 
     @Override
@@ -88,10 +114,15 @@ public final class ForceEngine implements Engine {
     }
 
     @Override
+    public MemberFunctions memberFunctions() {
+        return functions;
+    }
+
+    @Override
     public EngineResult solve(Model model) {
         EquilibriumMatrix eq = EquilibriumMatrix.of(model);
         if (eq.equations().size() > DENSE_LIMIT && model.redundants().isEmpty()) {
-            EngineResult sparse = SparseForceMethod.solve(model, eq, name());
+            EngineResult sparse = SparseForceMethod.solve(model, eq, this);
             if (!sparse.declined() || eq.equations().size() > DENSE_FALLBACK_LIMIT) return sparse;
         }
         int m = eq.equations().size(), n = eq.unknowns().size();
@@ -127,7 +158,6 @@ public final class ForceEngine implements Engine {
         List<double[]> pivotVectors = new ArrayList<>();
         int[] pivotOfRow = new int[m];
         java.util.Arrays.fill(pivotOfRow, -1);
-        List<Integer> pivotRows = new ArrayList<>();
         for (int j : order) {
             if (named.contains(unk.get(j).label())) continue;
             if (basic.size() == m) break;
@@ -159,7 +189,6 @@ public final class ForceEngine implements Engine {
             }
             pivotOfRow[q] = pivotVectors.size();
             pivotVectors.add(v);
-            pivotRows.add(q);
             basic.add(j);
         }
         if (basic.size() < m) {
@@ -212,7 +241,7 @@ public final class ForceEngine implements Engine {
         if (r > 0 && r <= WORKING_SHOWN) notes.add("flexibility coefficients delta_ij (SI): " + matrixText(delta.getData()));
         else if (r > 0) notes.add("flexibility coefficients: a " + r + " x " + r + " matrix (listed for up to " + WORKING_SHOWN + " redundants)");
         for (LoadCase c : model.loadCases()) {
-            Map<String, MemberActions> actions = MemberActions.of(model, c);
+            Map<String, MemberActions> actions = loading.of(model, c);
             Map<String, double[]> particular = new HashMap<>();
             double[] p = nodeLoads(model, c, actions, row, m, particular);
             double[] rhs = new double[m];
@@ -250,7 +279,7 @@ public final class ForceEngine implements Engine {
             double[] wb = new double[m];
             for (int b = 0; b < m; b++) wb[b] = -work[basic.get(b)];
             double[] u = primaryT.solve(new org.apache.commons.math3.linear.ArrayRealVector(wb, false)).toArray();
-            cases.put(c.name(), assemble(model, eq, c, actions, particular, xs, u, row));
+            cases.put(c.name(), assemble(model, eq, c, actions, particular, xs, u, row, functions));
         }
         ForceWorking record = new ForceWorking(redundant.stream().map(j -> unk.get(j).label()).toList(),
                 r > 0 && r <= WORKING_SHOWN ? delta.getData() : new double[0][], deltaZeros, redundantValues);
@@ -325,7 +354,8 @@ public final class ForceEngine implements Engine {
     }
 
     static Solution assemble(Model model, EquilibriumMatrix eq, LoadCase c, Map<String, MemberActions> actions,
-                                     Map<String, double[]> particular, double[] xs, double[] u, Map<String, Integer> row) {
+                             Map<String, double[]> particular, double[] xs, double[] u, Map<String, Integer> row,
+                             MemberFunctions functions) {
         Map<String, double[]> disp = new LinkedHashMap<>();
         for (Node nd : model.nodes().values()) {
             Integer rz = row.get(nd.name() + "/2");
@@ -367,7 +397,7 @@ public final class ForceEngine implements Engine {
             double vi = -ui[0] * dir[1] + ui[1] * dir[0], vj = -uj[0] * dir[1] + uj[1] * dir[0];
             MemberActions a = actions.getOrDefault(mem.name(), MemberActions.none(model.lengthM(mem)));
             double ei = model.materialOf(mem).ePa() * model.sectionOf(mem).inertiaM4();
-            members.put(mem.name(), MemberSolution.of(ends.get(mem.name()), a, ei, vi, vj));
+            members.put(mem.name(), functions.solve(ends.get(mem.name()), a, ei, vi, vj));
         }
         Solution s = new Solution(c.name(), disp, reactions, members, 0);
         double res = Equilibrium.residual(model, s, Map.of(c.name(), 1.0));
@@ -440,16 +470,6 @@ public final class ForceEngine implements Engine {
         return out;
     }
 
-    private static double norm(double[] v) {
-        return Math.sqrt(dot(v, v));
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int i = 0; i < a.length; i++) s += a[i] * b[i];
-        return s;
-    }
-
     static String vectorText(double[] v) {
         StringBuilder sb = new StringBuilder("[");
         for (int i = 0; i < v.length; i++) sb.append(i == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.6g", v[i]));
@@ -460,12 +480,5 @@ public final class ForceEngine implements Engine {
         StringBuilder sb = new StringBuilder("[");
         for (int i = 0; i < a.length; i++) sb.append(i == 0 ? "" : "; ").append(vectorText(a[i]));
         return sb.append("]").toString();
-    }
-
-    /** Exact integral of f(x) g(x) over the member, g written in x from the member start. */
-    static double integrate(Piecewise f, Poly g) {
-        double s = 0;
-        for (int k = 0; k < f.segments(); k++) s += f.piece(k).times(g.shifted(f.start(k))).integrate(f.end(k) - f.start(k));
-        return s;
     }
 }

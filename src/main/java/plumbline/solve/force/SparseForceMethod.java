@@ -51,10 +51,12 @@ final class SparseForceMethod {
     private final int[][] colRows;
     private final double[][] colVals;   // scaled A_s = R A C by columns
     private final int[] pos;            // equation -> position in the normal-equation ordering
+    private final ForceEngine method;     // the member loads and member functions to use
     private SkylineLdl normal;
 
-    private SparseForceMethod(Model model, EquilibriumMatrix eq) {
+    private SparseForceMethod(Model model, EquilibriumMatrix eq, ForceEngine method) {
         this.model = model;
+        this.method = method;
         this.eq = eq;
         m = eq.equations().size();
         n = eq.unknowns().size();
@@ -78,9 +80,9 @@ final class SparseForceMethod {
     }
 
     /** Solves the model, or returns a result whose instability says why this method declined. */
-    static EngineResult solve(Model model, EquilibriumMatrix eq, String engine) {
-        SparseForceMethod s = new SparseForceMethod(model, eq);
-        return s.run(engine);
+    static EngineResult solve(Model model, EquilibriumMatrix eq, ForceEngine method) {
+        SparseForceMethod s = new SparseForceMethod(model, eq, method);
+        return s.run(method.name());
     }
 
     private int[] equationOrder() {
@@ -211,7 +213,7 @@ final class SparseForceMethod {
         for (int i = 0; i < m; i++) row.put(eq.equations().get(i).node() + "/" + eq.equations().get(i).direction(), i);
         Map<String, Solution> cases = new LinkedHashMap<>();
         for (LoadCase c : model.loadCases()) {
-            Map<String, MemberActions> actions = MemberActions.of(model, c);
+            Map<String, MemberActions> actions = method.loading().of(model, c);
             Map<String, double[]> particular = new HashMap<>();
             double[] p = ForceEngine.nodeLoads(model, c, actions, row, m, particular);
             double[] bs = new double[m];
@@ -243,7 +245,7 @@ final class SparseForceMethod {
             double[] us = compatibleDisplacements(ws);
             double[] u = new double[m];
             for (int i = 0; i < m; i++) u[i] = us[i] * rowScale[i];
-            cases.put(c.name(), ForceEngine.assemble(model, eq, c, actions, particular, x, u, row));
+            cases.put(c.name(), ForceEngine.assemble(model, eq, c, actions, particular, x, u, row, method.memberFunctions()));
         }
         List<String> notes = List.of("redundants: " + r + " self-stress states of the " + faces.size()
                         + " closed rings (sparse force method; the working is not listed at this size)",

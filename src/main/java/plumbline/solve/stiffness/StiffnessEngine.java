@@ -18,6 +18,8 @@ import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
 import plumbline.solve.Equilibrium;
 import plumbline.solve.MemberActions;
+import plumbline.solve.MemberFunctions;
+import plumbline.solve.MemberLoading;
 import plumbline.solve.MemberSolution;
 import plumbline.solve.Solution;
 
@@ -44,9 +46,28 @@ public final class StiffnessEngine implements Engine {
     /** Notes that begin with this word are warnings for the checker. */
     public static final String ILL_CONDITIONED_NOTE = "warning:";
 
+    private final MemberLoading loading;
+    private final MemberFunctions functions;
+
+    /** The engine as the tool runs it: the shared member loads and member functions. */
+    public StiffnessEngine() {
+        this(MemberLoading.SHARED, MemberFunctions.SHARED);
+    }
+
+    /** An engine with the given member loads and functions: the seam through which tests plant slips. */
+    public StiffnessEngine(MemberLoading loading, MemberFunctions functions) {
+        this.loading = loading;
+        this.functions = functions;
+    }
+
     @Override
     public String name() {
         return "stiffness";
+    }
+
+    @Override
+    public MemberFunctions memberFunctions() {
+        return functions;
     }
 
     /** One member's condensed local stiffness, fixed-end forces per case and the assembly data. */
@@ -158,7 +179,7 @@ public final class StiffnessEngine implements Engine {
                                boolean[][] fixed, List<int[]> restrained, int free, List<Element> elements,
                                double[] frameAngle, SkylineLdl k) {
         int nn = nodes.size();
-        Map<String, MemberActions> actions = MemberActions.of(model, c);
+        Map<String, MemberActions> actions = loading.of(model, c);
         double[][] load = new double[nn][3];      // applied node loads, node frames
         for (NodeLoad nl : c.nodeLoads()) {
             int n = index.get(nl.node());
@@ -228,7 +249,7 @@ public final class StiffnessEngine implements Engine {
             if (e.member.releasedStart()) local[2] = 0;
             if (e.member.releasedEnd()) local[5] = 0;
             MemberActions acts = a == null ? MemberActions.none(e.lengthM) : a;
-            members.put(e.member.name(), MemberSolution.of(local, acts, e.ei, uLocal[1], uLocal[4]));
+            members.put(e.member.name(), functions.solve(local, acts, e.ei, uLocal[1], uLocal[4]));
         }
         Map<String, double[]> reactions = new LinkedHashMap<>();
         for (Support s : model.supports().values()) {
