@@ -1,11 +1,16 @@
 package plumbline.linalg;
 
+import java.util.ArrayList;
+import java.util.List;
+
 /**
- * A symmetric matrix in skyline (variable band) storage and its L D L^T factorization,
- * column by column (the active-column scheme of K.J. Bathe, Finite Element Procedures,
- * 1996, section 8.2.3). Factored once; every right-hand side is then a forward and a
- * back substitution. General numerics with no structural knowledge: the stiffness engine
- * factors K with it, statics factors A A^T with it for large models.
+ * The L D L^T factorization of a symmetric {@link SkylineMatrix}, column by column (the
+ * active-column scheme of K.J. Bathe, Finite Element Procedures, 1996, section 8.2.3).
+ * Made once by {@link SkylineMatrix#factor()}, then only used: every right-hand side is a
+ * forward and a back substitution. Immutable; a factorization that met a vanishing pivot
+ * says where ({@link #singularAt()}) and refuses to solve. General numerics with no
+ * structural knowledge: the stiffness engine factors K with it, statics and the sparse
+ * force method factor A A^T and their compatibility matrices with it.
  */
 public final class SkylineLdl {
 
@@ -17,17 +22,66 @@ public final class SkylineLdl {
     public static final double PIVOT_TOLERANCE = 1e-11;
 
     private final int n;
-    private final int[] first;   // first row stored in column j
-    private final int[] start;   // offset of column j's entries (rows first[j]..j)
-    private final double[] a;
-    private int singularAt = -1;
+    private final int[] first, start;
+    private final double[] a;            // L below the diagonal, D on it
+    private final int singularAt;        // -1 when every pivot held (definite factorization)
+    private final int[] zeroPivots;      // semi-definite factorization: the dropped pivots
+    private final double smallestPivotRatio;
+    private final int smallestPivotAt;
 
-    public SkylineLdl(int[] firstRow) {
-        n = firstRow.length;
-        first = firstRow.clone();
-        start = new int[n + 1];
-        for (int j = 0; j < n; j++) start[j + 1] = start[j] + (j - first[j] + 1);
-        a = new double[start[n]];
+    private SkylineLdl(SkylineMatrix m, double[] a, int singularAt, int[] zeroPivots, double smallestPivotRatio,
+                       int smallestPivotAt) {
+        this.n = m.n;
+        this.first = m.first;
+        this.start = m.start;
+        this.a = a;
+        this.singularAt = singularAt;
+        this.zeroPivots = zeroPivots;
+        this.smallestPivotRatio = smallestPivotRatio;
+        this.smallestPivotAt = smallestPivotAt;
+    }
+
+    /**
+     * The active-column L D L^T of a copy of m. A pivot below {@code tol} of its original
+     * diagonal stops a definite factorization, or, when {@code semidefinite}, is recorded and
+     * dropped (later columns take nothing from its row).
+     */
+    static SkylineLdl of(SkylineMatrix m, double tol, boolean semidefinite) {
+        int n = m.n;
+        int[] first = m.first, start = m.start;
+        double[] a = m.a.clone();
+        List<Integer> zeros = new ArrayList<>();
+        double smallest = 1;
+        int smallestAt = -1;
+        for (int j = 0; j < n; j++) {
+            int mj = first[j], sj = start[j];
+            double original = a[sj + j - mj];
+            // g_ij = a_ij - sum_r l_ri d_r l_rj, stored in place of a_ij (rows above the diagonal)
+            for (int i = mj + 1; i < j; i++) {
+                int mi = first[i], si = start[i];
+                double s = 0;
+                for (int r = Math.max(mi, mj); r < i; r++) s += a[si + r - mi] * a[sj + r - mj];
+                a[sj + i - mj] -= s;
+            }
+            // l_ij = g_ij / d_i; d_j = a_jj - sum_i g_ij l_ij
+            double d = original;
+            for (int i = mj; i < j; i++) {
+                double g = a[sj + i - mj];
+                double l = g / a[start[i] + i - first[i]];
+                a[sj + i - mj] = l;
+                d -= g * l;
+            }
+            if (!(d > tol * Math.abs(original)) || !(original > 0)) {
+                if (!semidefinite) return new SkylineLdl(m, a, j, new int[0], smallest, smallestAt);
+                zeros.add(j);
+                d = Double.POSITIVE_INFINITY; // 1/d = 0: the dropped row contributes nothing
+            } else if (d / original < smallest) {
+                smallest = d / original;
+                smallestAt = j;
+            }
+            a[sj + j - mj] = d;
+        }
+        return new SkylineLdl(m, a, -1, zeros.stream().mapToInt(Integer::intValue).toArray(), smallest, smallestAt);
     }
 
     public int size() {
@@ -38,77 +92,35 @@ public final class SkylineLdl {
         return start[n];
     }
 
-    /** Adds v to entry (i, j); only the upper triangle within the skyline is stored. */
-    public void add(int i, int j, double v) {
-        if (i > j) {
-            int t = i;
-            i = j;
-            j = t;
-        }
-        if (i < first[j]) throw new IllegalStateException("entry outside the skyline");
-        a[start[j] + i - first[j]] += v;
+    /** True when every pivot held: {@link #solve(double[])} may be used. */
+    public boolean isNonSingular() {
+        return singularAt < 0;
     }
 
-    /** Factors in place; returns false (and remembers where) if a pivot vanishes. */
-    public boolean factor() {
-        return eliminate(PIVOT_TOLERANCE, null);
+    /** The column whose pivot vanished in a definite factorization, or -1. */
+    public int singularAt() {
+        return singularAt;
     }
 
-    /**
-     * Factors a positive semi-definite matrix, treating every pivot below
-     * {@code relativeTolerance} of its original diagonal as zero (its row of the Schur
-     * complement is then zero to rounding, so it is dropped). Returns the indices of the
-     * zero pivots; their number is the nullity.
-     */
-    public int[] factorSemidefinite(double relativeTolerance) {
-        java.util.List<Integer> zeros = new java.util.ArrayList<>();
-        eliminate(relativeTolerance, zeros);
-        zeroPivots = zeros.stream().mapToInt(Integer::intValue).toArray();
+    /** The zero pivots of a semi-definite factorization; their number is the nullity. */
+    public int[] zeroPivots() {
         return zeroPivots.clone();
     }
 
     /**
-     * The active-column L D L^T. A pivot below {@code tol} of its original diagonal stops a
-     * definite factorization (returns false), or, when {@code zeros} collects them, is
-     * recorded and dropped (later columns take nothing from its row).
+     * The smallest ratio of a pivot to its original diagonal: a cheap condition indicator
+     * (about 1/condition for the freedom where it occurs); digits lost there are about
+     * -log10 of it.
      */
-    private boolean eliminate(double tol, java.util.List<Integer> zeros) {
-        for (int j = 0; j < n; j++) {
-            int mj = first[j], sj = start[j];
-            double original = a[sj + j - mj];
-            for (int i = mj + 1; i < j; i++) {
-                int mi = first[i], si = start[i];
-                int m = Math.max(mi, mj);
-                double s = 0;
-                for (int r = m; r < i; r++) s += a[si + r - mi] * a[sj + r - mj];
-                a[sj + i - mj] -= s;
-            }
-            double d = original;
-            for (int i = mj; i < j; i++) {
-                double g = a[sj + i - mj];
-                double l = g / a[start[i] + i - first[i]];
-                a[sj + i - mj] = l;
-                d -= g * l;
-            }
-            if (!(d > tol * Math.abs(original)) || !(original > 0)) {
-                if (zeros == null) {
-                    singularAt = j;
-                    return false;
-                }
-                zeros.add(j);
-                d = Double.POSITIVE_INFINITY;
-            } else if (d / original < smallestPivotRatio) {
-                smallestPivotRatio = d / original;
-                smallestPivotAt = j;
-            }
-            a[sj + j - mj] = d;
-        }
-        return true;
+    public double smallestPivotRatio() {
+        return smallestPivotRatio;
     }
 
-    private int[] zeroPivots = new int[0];
+    public int smallestPivotAt() {
+        return smallestPivotAt;
+    }
 
-    /** A null vector for zero pivot {@code j} after {@link #factorSemidefinite}: L^T x = e_j. */
+    /** A null vector for zero pivot {@code j} of a semi-definite factorization: L^T x = e_j. */
     public double[] nullVector(int j) {
         double[] x = new double[n];
         x[j] = 1;
@@ -121,37 +133,19 @@ public final class SkylineLdl {
         return x;
     }
 
-    private double smallestPivotRatio = 1;
-    private int smallestPivotAt = -1;
-
-    /**
-     * The smallest ratio of a pivot to its original diagonal after {@link #factor()}: a cheap
-     * condition indicator (about 1/condition for the freedom where it occurs); digits lost
-     * there are about -log10 of it.
-     */
-    public double smallestPivotRatio() {
-        return smallestPivotRatio;
-    }
-
-    public int smallestPivotAt() {
-        return smallestPivotAt;
-    }
-
-    public int singularAt() {
-        return singularAt;
-    }
-
-    /** Solves (L D L^T) x = b after {@link #factor()}; b is not changed. */
+    /** Solves (L D L^T) x = b; b is not changed. */
     public double[] solve(double[] b) {
+        if (singularAt >= 0) throw new IllegalStateException("the matrix is singular at column " + singularAt + "; nothing to solve with");
+        if (b.length != n) throw new IllegalArgumentException("right-hand side of " + b.length + " entries for a matrix of " + n);
         double[] x = b.clone();
-        for (int j = 0; j < n; j++) {
+        for (int j = 0; j < n; j++) {           // L y = b
             int mj = first[j], sj = start[j];
             double s = 0;
             for (int r = mj; r < j; r++) s += a[sj + r - mj] * x[r];
             x[j] -= s;
         }
-        for (int j = 0; j < n; j++) x[j] /= a[start[j] + j - first[j]];
-        for (int j = n - 1; j >= 0; j--) {
+        for (int j = 0; j < n; j++) x[j] /= a[start[j] + j - first[j]]; // D z = y
+        for (int j = n - 1; j >= 0; j--) {      // L^T x = z
             int mj = first[j], sj = start[j];
             double xj = x[j];
             for (int r = mj; r < j; r++) x[r] -= a[sj + r - mj] * xj;

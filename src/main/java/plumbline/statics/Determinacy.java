@@ -6,6 +6,8 @@ import java.util.Locale;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
+import plumbline.linalg.SkylineLdl;
+import plumbline.linalg.SkylineMatrix;
 import plumbline.model.Member;
 import plumbline.model.Model;
 import plumbline.model.Node;
@@ -113,7 +115,7 @@ public final class Determinacy {
             for (int i : r) min = Math.min(min, pos[i]);
             for (int i : r) first[pos[i]] = Math.min(first[pos[i]], min);
         }
-        plumbline.linalg.SkylineLdl k = new plumbline.linalg.SkylineLdl(first);
+        SkylineMatrix k = new SkylineMatrix(first);
         for (int j = 0; j < n; j++) {
             int[] r = eq.columnRows(j);
             double[] v = eq.columnValues(j);
@@ -124,11 +126,12 @@ public final class Determinacy {
                 }
             }
         }
-        int[] zeros = k.factorSemidefinite(SPARSE_PIVOT_TOLERANCE);
+        SkylineLdl ldl = k.factorSemidefinite(SPARSE_PIVOT_TOLERANCE);
+        int[] zeros = ldl.zeroPivots();
         List<Mechanism> shapes = new ArrayList<>();
         List<double[]> basis = new ArrayList<>();
         for (int z : zeros) {
-            double[] x = k.nullVector(z);
+            double[] x = ldl.nullVector(z);
             double[] vec = new double[m];
             for (int i = 0; i < m; i++) vec[i] = x[pos[i]];
             basis.add(vec);

@@ -1,5 +1,6 @@
 package plumbline.arch;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
@@ -39,6 +40,40 @@ class ArchitectureTest {
     static final Map<String, String> LIBRARIES = Map.of("com.fasterxml.jackson", "io", "com.lowagie", "report", "picocli", "cli");
 
     static final Pattern OURS = Pattern.compile("plumbline\\.([a-z]+)(\\.(stiffness|force))?\\.[A-Z]");
+
+    /**
+     * The shared classes of plumbline.solve each engine may name, exactly: the result types,
+     * the member loads and the seams, and the equilibrium check. Neither engine names the
+     * shared member functions' code (MemberResponse, Poly, Piecewise beyond its value record
+     * Extreme) by itself: the stiffness method takes them through MemberFunctions.SHARED, the
+     * force method writes its own (ClosedFormMember).
+     */
+    static final Map<String, Set<String>> SHARED_BY_ENGINE = Map.of(
+            "stiffness", Set.of("Engine", "EngineResult", "Equilibrium", "MemberActions", "MemberFunctions", "MemberLoading",
+                    "MemberSolution", "Solution"),
+            "force", Set.of("Engine", "EngineResult", "Equilibrium", "ForceWorking", "MemberActions", "MemberFunctions",
+                    "MemberLoading", "MemberSolution", "Peaks", "Piecewise", "Solution"));
+
+    static final Pattern SHARED = Pattern.compile("plumbline\\.solve\\.([A-Z]\\w*)");
+
+    @Test
+    void eachEngineUsesExactlyItsListOfSharedClasses() throws Exception {
+        for (var e : SHARED_BY_ENGINE.entrySet()) {
+            Set<String> used = new java.util.TreeSet<>();
+            List<String> piecewise = new ArrayList<>();
+            try (Stream<Path> files = Files.list(Path.of("src/main/java/plumbline/solve/" + e.getKey()))) {
+                for (Path f : files.filter(p -> p.toString().endsWith(".java")).toList()) {
+                    String text = Files.readString(f);
+                    Matcher m = SHARED.matcher(text);
+                    while (m.find()) used.add(m.group(1));
+                    Matcher p = Pattern.compile("\\bPiecewise\\.(\\w+)").matcher(text);
+                    while (p.find()) if (!p.group(1).equals("Extreme")) piecewise.add(f + ": Piecewise." + p.group(1));
+                }
+            }
+            assertEquals(new java.util.TreeSet<>(e.getValue()), used, e.getKey() + " method's shared classes");
+            assertTrue(piecewise.isEmpty(), String.join("\n", piecewise));
+        }
+    }
 
     @Test
     void noBackwardArrows() throws Exception {

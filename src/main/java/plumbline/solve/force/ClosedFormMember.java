@@ -12,8 +12,10 @@ import plumbline.solve.Piecewise;
 /**
  * The force method's own internal-force and deflection functions of one member, written in
  * closed form with Macaulay brackets, so that its peaks and its compatibility terms do not
- * come from the code the stiffness method uses ({@code MemberResponse}, {@code Piecewise}):
- * the two methods' agreement then covers the member mechanics too.
+ * come from the code the stiffness method uses ({@code MemberResponse}, and the integration
+ * and root finding of {@code Piecewise} and {@code Poly}; only the value record
+ * {@code Piecewise.Extreme} that {@code Peaks} is made of is shared): the two methods'
+ * agreement then covers the member mechanics too.
  *
  * <p>Signs as FORMAT.md section 4: N tension positive, M positive when the local -y face is
  * in tension, V = dM/dx, with the forces on the start (fx, fy, m, local, acting on the

@@ -11,6 +11,7 @@ import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
 import plumbline.linalg.NodeOrdering;
 import plumbline.linalg.SkylineLdl;
+import plumbline.linalg.SkylineMatrix;
 import plumbline.model.LoadCase;
 import plumbline.model.Member;
 import plumbline.model.Model;
@@ -114,16 +115,17 @@ final class SparseForceMethod {
             for (int i : colRows[j]) min = Math.min(min, pos[i]);
             for (int i : colRows[j]) first[pos[i]] = Math.min(first[pos[i]], min);
         }
-        normal = new SkylineLdl(first);
+        SkylineMatrix normalMatrix = new SkylineMatrix(first);
         for (int j = 0; j < n; j++) {
             for (int p = 0; p < colRows[j].length; p++) {
                 for (int q = 0; q < colRows[j].length; q++) {
                     int a = pos[colRows[j][p]], b = pos[colRows[j][q]];
-                    if (a <= b) normal.add(a, b, colVals[j][p] * colVals[j][q]);
+                    if (a <= b) normalMatrix.add(a, b, colVals[j][p] * colVals[j][q]);
                 }
             }
         }
-        if (!normal.factor()) return EngineResult.unstable(engine, "the equilibrium equations are singular: no statically admissible state");
+        normal = normalMatrix.factor();
+        if (!normal.isNonSingular()) return EngineResult.unstable(engine, "the equilibrium equations are singular: no statically admissible state");
         // local self-stress states from the rings
         List<int[]> faces = faces();
         if (faces == null) {
@@ -186,7 +188,7 @@ final class SparseForceMethod {
             for (int t : l) min = Math.min(min, at[t]);
             for (int t : l) dfirst[at[t]] = Math.min(dfirst[at[t]], min);
         }
-        SkylineLdl delta = new SkylineLdl(dfirst);
+        SkylineMatrix deltaMatrix = new SkylineMatrix(dfirst);
         for (var e : touching.entrySet()) {
             int[] group = flex.group(e.getKey());
             for (int a : e.getValue()) {
@@ -202,11 +204,12 @@ final class SparseForceMethod {
                             v += xa * flex.coefficient(group[p], q) * colScale[group[p]] * colScale[group[q]] * xb;
                         }
                     }
-                    if (v != 0) delta.add(at[a], at[b], v);
+                    if (v != 0) deltaMatrix.add(at[a], at[b], v);
                 }
             }
         }
-        if (!delta.factor()) {
+        SkylineLdl delta = deltaMatrix.factor();
+        if (!delta.isNonSingular()) {
             return EngineResult.declined(engine, "the ring self-stress states are not independent; the sparse force method declines this model");
         }
         Map<String, Integer> row = new HashMap<>();

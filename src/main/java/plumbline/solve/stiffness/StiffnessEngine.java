@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import plumbline.linalg.NodeOrdering;
 import plumbline.linalg.SkylineLdl;
+import plumbline.linalg.SkylineMatrix;
 import plumbline.model.LoadCase;
 import plumbline.model.Member;
 import plumbline.model.Model;
@@ -95,7 +96,7 @@ public final class StiffnessEngine implements Engine {
         for (Member m : model.members().values()) edges.add(new int[]{index.get(m.from()), index.get(m.to())});
         int[] order = NodeOrdering.reverseCuthillMcKee(nn, edges);
 
-        // number every freedom; restrained ones get -(k+2) codes in a separate list
+        // number every freedom; restrained freedom k (0-based, in a separate list) gets the code -(k+1)
         int[][] dof = new int[nn][3];
         boolean[][] fixed = new boolean[nn][3];
         int free = 0;
@@ -127,24 +128,25 @@ public final class StiffnessEngine implements Engine {
             for (int d : e.dofs) if (d >= 0) min = Math.min(min, d);
             for (int d : e.dofs) if (d >= 0) first[d] = Math.min(first[d], min);
         }
-        SkylineLdl k = new SkylineLdl(first);
+        SkylineMatrix kff = new SkylineMatrix(first);
         for (Element e : elements) {
             for (int a = 0; a < 6; a++) {
                 if (e.dofs[a] < 0) continue;
                 for (int b = 0; b < 6; b++) {
                     if (e.dofs[b] < 0 || e.dofs[b] < e.dofs[a]) continue;
                     double v = e.kFrame[a][b];
-                    if (v != 0) k.add(e.dofs[a], e.dofs[b], v);
+                    if (v != 0) kff.add(e.dofs[a], e.dofs[b], v);
                 }
             }
         }
         for (Support s : model.supports().values()) {
             int n = index.get(s.node());
             for (int d = 0; d < 3; d++) {
-                if (s.spring(d) > 0 && dof[n][d] >= 0) k.add(dof[n][d], dof[n][d], s.spring(d));
+                if (s.spring(d) > 0 && dof[n][d] >= 0) kff.add(dof[n][d], dof[n][d], s.spring(d));
             }
         }
-        if (!k.factor()) {
+        SkylineLdl k = kff.factor();
+        if (!k.isNonSingular()) {
             int bad = k.singularAt();
             String where = "";
             for (int n = 0; n < nn; n++) for (int d = 0; d < 3; d++) if (dof[n][d] == bad) {
@@ -169,107 +171,115 @@ public final class StiffnessEngine implements Engine {
                     where, k.smallestPivotRatio(), (int) Math.round(-Math.log10(k.smallestPivotRatio())), String.join(", ", at2)));
         }
         Map<String, Solution> cases = new LinkedHashMap<>();
-        for (LoadCase c : model.loadCases()) {
-            cases.put(c.name(), solveCase(model, c, nodes, index, dof, fixed, restrained, free, elements, frameAngle, k));
-        }
+        Factored kf = new Factored(model, nodes, index, dof, fixed, free, List.copyOf(elements), frameAngle, k, loading, functions);
+        for (LoadCase c : model.loadCases()) cases.put(c.name(), kf.solve(c));
         return new EngineResult(name(), true, null, cases, notes);
     }
 
-    private Solution solveCase(Model model, LoadCase c, List<Node> nodes, Map<String, Integer> index, int[][] dof,
-                               boolean[][] fixed, List<int[]> restrained, int free, List<Element> elements,
-                               double[] frameAngle, SkylineLdl k) {
-        int nn = nodes.size();
-        Map<String, MemberActions> actions = loading.of(model, c);
-        double[][] load = new double[nn][3];      // applied node loads, node frames
-        for (NodeLoad nl : c.nodeLoads()) {
-            int n = index.get(nl.node());
-            double cs = Math.cos(frameAngle[n]), sn = Math.sin(frameAngle[n]);
-            load[n][0] += nl.fxN() * cs + nl.fyN() * sn;
-            load[n][1] += -nl.fxN() * sn + nl.fyN() * cs;
-            load[n][2] += nl.mzNm();
-        }
-        double[][] prescribed = new double[nn][3];
-        for (Settlement s : c.settlements()) {
-            int n = index.get(s.node());
-            for (int d = 0; d < 3; d++) if (!Double.isNaN(s.value(d))) prescribed[n][d] = s.value(d);
-        }
-        Map<Element, double[]> fixedEnd = new HashMap<>();
-        double[] rhs = new double[free];
-        for (int n = 0; n < nn; n++) for (int d = 0; d < 3; d++) if (dof[n][d] >= 0) rhs[dof[n][d]] += load[n][d];
-        for (Element e : elements) {
-            MemberActions a = actions.get(e.member.name());
-            double[] f0 = a == null ? new double[6] : frame(e, fixedEndForces(e, a));
-            fixedEnd.put(e, f0);
-            int[] nodesOf = {e.i, e.i, e.i, e.j, e.j, e.j};
-            double[] ur = new double[6];
-            boolean any = false;
-            for (int q = 0; q < 6; q++) {
-                if (e.dofs[q] == Integer.MIN_VALUE || e.dofs[q] >= 0) continue;
-                ur[q] = prescribed[nodesOf[q]][q % 3];
-                any |= ur[q] != 0;
+    /**
+     * The model with K_ff factored once: the numbering of its freedoms (dof[node][direction]:
+     * a free freedom's index, a negative code for a restrained one, Integer.MIN_VALUE where a
+     * node has no rotation), its elements and the factorization. Each load case is then a
+     * right-hand side: {@link #solve(LoadCase)}.
+     */
+    private record Factored(Model model, List<Node> nodes, Map<String, Integer> index, int[][] dof, boolean[][] fixed,
+                            int free, List<Element> elements, double[] frameAngle, SkylineLdl k,
+                            MemberLoading loading, MemberFunctions functions) {
+
+        Solution solve(LoadCase c) {
+            int nn = nodes.size();
+            Map<String, MemberActions> actions = loading.of(model, c);
+            double[][] load = new double[nn][3];      // applied node loads, node frames
+            for (NodeLoad nl : c.nodeLoads()) {
+                int n = index.get(nl.node());
+                double cs = Math.cos(frameAngle[n]), sn = Math.sin(frameAngle[n]);
+                load[n][0] += nl.fxN() * cs + nl.fyN() * sn;
+                load[n][1] += -nl.fxN() * sn + nl.fyN() * cs;
+                load[n][2] += nl.mzNm();
             }
-            for (int p = 0; p < 6; p++) {
-                if (e.dofs[p] < 0) continue;
-                double v = -f0[p];
-                if (any) for (int q = 0; q < 6; q++) v -= e.kFrame[p][q] * ur[q];
-                rhs[e.dofs[p]] += v;
+            double[][] prescribed = new double[nn][3];
+            for (Settlement s : c.settlements()) {
+                int n = index.get(s.node());
+                for (int d = 0; d < 3; d++) if (!Double.isNaN(s.value(d))) prescribed[n][d] = s.value(d);
             }
-        }
-        double[] uf = k.solve(rhs);
-        double[][] u = new double[nn][3];
-        for (int n = 0; n < nn; n++) {
-            for (int d = 0; d < 3; d++) {
-                if (dof[n][d] >= 0) u[n][d] = uf[dof[n][d]];
-                else if (dof[n][d] != Integer.MIN_VALUE) u[n][d] = prescribed[n][d];
+            Map<Element, double[]> fixedEnd = new HashMap<>();
+            double[] rhs = new double[free];
+            for (int n = 0; n < nn; n++) for (int d = 0; d < 3; d++) if (dof[n][d] >= 0) rhs[dof[n][d]] += load[n][d];
+            for (Element e : elements) {
+                MemberActions a = actions.get(e.member.name());
+                double[] f0 = a == null ? new double[6] : frame(e, fixedEndForces(e, a));
+                fixedEnd.put(e, f0);
+                int[] nodesOf = {e.i, e.i, e.i, e.j, e.j, e.j};
+                double[] ur = new double[6];
+                boolean any = false;
+                for (int q = 0; q < 6; q++) {
+                    if (e.dofs[q] == Integer.MIN_VALUE || e.dofs[q] >= 0) continue;
+                    ur[q] = prescribed[nodesOf[q]][q % 3];
+                    any |= ur[q] != 0;
+                }
+                for (int p = 0; p < 6; p++) {
+                    if (e.dofs[p] < 0) continue;
+                    double v = -f0[p];
+                    if (any) for (int q = 0; q < 6; q++) v -= e.kFrame[p][q] * ur[q];
+                    rhs[e.dofs[p]] += v;
+                }
             }
-        }
-        // member end forces (local) and the forces members exert back on the supports
-        double[][] fromMembers = new double[nn][3];
-        Map<String, MemberSolution> members = new LinkedHashMap<>();
-        for (Element e : elements) {
-            double[] ue = new double[6];
-            int[] nodesOf = {e.i, e.i, e.i, e.j, e.j, e.j};
-            for (int q = 0; q < 6; q++) ue[q] = u[nodesOf[q]][q % 3];
-            double[] f0 = fixedEnd.get(e);
-            for (int p = 0; p < 6; p++) {
-                double v = f0[p];
-                for (int q = 0; q < 6; q++) v += e.kFrame[p][q] * ue[q];
-                fromMembers[nodesOf[p]][p % 3] += v;
+            double[] uf = k.solve(rhs);
+            double[][] u = new double[nn][3];
+            for (int n = 0; n < nn; n++) {
+                for (int d = 0; d < 3; d++) {
+                    if (dof[n][d] >= 0) u[n][d] = uf[dof[n][d]];
+                    else if (dof[n][d] != Integer.MIN_VALUE) u[n][d] = prescribed[n][d];
+                }
             }
-            double[] local = new double[6];
-            double[] uLocal = new double[6];
-            for (int p = 0; p < 6; p++) for (int q = 0; q < 6; q++) uLocal[p] += e.t[p][q] * ue[q];
-            MemberActions a = actions.get(e.member.name());
-            double[] f0Local = a == null ? new double[6] : fixedEndForces(e, a);
-            for (int p = 0; p < 6; p++) {
-                double v = f0Local[p];
-                for (int q = 0; q < 6; q++) v += e.kLocal[p][q] * uLocal[q];
-                local[p] = v;
+            // member end forces (local) and the forces members exert back on the supports
+            double[][] fromMembers = new double[nn][3];
+            Map<String, MemberSolution> members = new LinkedHashMap<>();
+            for (Element e : elements) {
+                double[] ue = new double[6];
+                int[] nodesOf = {e.i, e.i, e.i, e.j, e.j, e.j};
+                for (int q = 0; q < 6; q++) ue[q] = u[nodesOf[q]][q % 3];
+                double[] f0 = fixedEnd.get(e);
+                for (int p = 0; p < 6; p++) {
+                    double v = f0[p];
+                    for (int q = 0; q < 6; q++) v += e.kFrame[p][q] * ue[q];
+                    fromMembers[nodesOf[p]][p % 3] += v;
+                }
+                double[] local = new double[6];
+                double[] uLocal = new double[6];
+                for (int p = 0; p < 6; p++) for (int q = 0; q < 6; q++) uLocal[p] += e.t[p][q] * ue[q];
+                MemberActions a = actions.get(e.member.name());
+                double[] f0Local = a == null ? new double[6] : fixedEndForces(e, a);
+                for (int p = 0; p < 6; p++) {
+                    double v = f0Local[p];
+                    for (int q = 0; q < 6; q++) v += e.kLocal[p][q] * uLocal[q];
+                    local[p] = v;
+                }
+                if (e.member.releasedStart()) local[2] = 0;
+                if (e.member.releasedEnd()) local[5] = 0;
+                MemberActions acts = a == null ? MemberActions.none(e.lengthM) : a;
+                members.put(e.member.name(), functions.solve(local, acts, e.ei, uLocal[1], uLocal[4]));
             }
-            if (e.member.releasedStart()) local[2] = 0;
-            if (e.member.releasedEnd()) local[5] = 0;
-            MemberActions acts = a == null ? MemberActions.none(e.lengthM) : a;
-            members.put(e.member.name(), functions.solve(local, acts, e.ei, uLocal[1], uLocal[4]));
-        }
-        Map<String, double[]> reactions = new LinkedHashMap<>();
-        for (Support s : model.supports().values()) {
-            int n = index.get(s.node());
-            double[] r = new double[3];
-            for (int d = 0; d < 3; d++) {
-                if (fixed[n][d]) r[d] = fromMembers[n][d] - load[n][d];
-                else if (s.spring(d) > 0) r[d] = -s.spring(d) * u[n][d];
+            Map<String, double[]> reactions = new LinkedHashMap<>();
+            for (Support s : model.supports().values()) {
+                int n = index.get(s.node());
+                double[] r = new double[3];
+                for (int d = 0; d < 3; d++) {
+                    if (fixed[n][d]) r[d] = fromMembers[n][d] - load[n][d];
+                    else if (s.spring(d) > 0) r[d] = -s.spring(d) * u[n][d];
+                }
+                double cs = Math.cos(frameAngle[n]), sn = Math.sin(frameAngle[n]);
+                reactions.put(s.node(), new double[]{r[0] * cs - r[1] * sn, r[0] * sn + r[1] * cs, r[2]});
             }
-            double cs = Math.cos(frameAngle[n]), sn = Math.sin(frameAngle[n]);
-            reactions.put(s.node(), new double[]{r[0] * cs - r[1] * sn, r[0] * sn + r[1] * cs, r[2]});
+            Map<String, double[]> disp = new LinkedHashMap<>();
+            for (int n = 0; n < nn; n++) {
+                double cs = Math.cos(frameAngle[n]), sn = Math.sin(frameAngle[n]);
+                disp.put(nodes.get(n).name(), new double[]{u[n][0] * cs - u[n][1] * sn, u[n][0] * sn + u[n][1] * cs, u[n][2]});
+            }
+            Solution s = new Solution(c.name(), disp, reactions, members, 0);
+            double residual = Equilibrium.residual(model, s, Map.of(c.name(), 1.0));
+            return new Solution(c.name(), disp, reactions, members, residual);
         }
-        Map<String, double[]> disp = new LinkedHashMap<>();
-        for (int n = 0; n < nn; n++) {
-            double cs = Math.cos(frameAngle[n]), sn = Math.sin(frameAngle[n]);
-            disp.put(nodes.get(n).name(), new double[]{u[n][0] * cs - u[n][1] * sn, u[n][0] * sn + u[n][1] * cs, u[n][2]});
-        }
-        Solution s = new Solution(c.name(), disp, reactions, members, 0);
-        double residual = Equilibrium.residual(model, s, Map.of(c.name(), 1.0));
-        return new Solution(c.name(), disp, reactions, members, residual);
     }
 
     private static double[] frame(Element e, double[] local) {
