@@ -12,6 +12,7 @@ import org.junit.jupiter.api.RepeatedTest;
 import org.junit.jupiter.api.RepetitionInfo;
 import plumbline.Models;
 import plumbline.model.Model;
+import plumbline.solve.force.ForceEngine;
 import plumbline.solve.stiffness.StiffnessEngine;
 import plumbline.statics.Determinacy;
 import plumbline.units.Units;
@@ -115,8 +116,11 @@ class MetamorphicTest {
         return sb.toString();
     }
 
-    static Solution solve(String yaml) {
-        EngineResult r = new StiffnessEngine().solve(Models.yaml(yaml));
+    /** Both methods meet every relation: the stiffness method and the force method (its own member functions). */
+    static final List<Engine> ENGINES = List.of(new StiffnessEngine(), new ForceEngine());
+
+    static Solution solve(Engine engine, String yaml) {
+        EngineResult r = engine.solve(Models.yaml(yaml));
         return r.cases().get("P");
     }
 
@@ -132,18 +136,22 @@ class MetamorphicTest {
 
     @RepeatedTest(25)
     void sameAnswersWhateverTheWriting(RepetitionInfo info) {
+        for (Engine engine : ENGINES) sameAnswersWhateverTheWriting(engine, info);
+    }
+
+    private static void sameAnswersWhateverTheWriting(Engine engine, RepetitionInfo info) {
         Random rnd = new Random(9000L + info.getCurrentRepetition());
         Spec s = random(rnd);
-        Solution base = solve(yaml(s, 0, 0, 0, false, false, 1.0, null));
+        Solution base = solve(engine, yaml(s, 0, 0, 0, false, false, 1.0, null));
         double sc = scaleOf(base);
         // units: kip and ft
-        Solution us = solve(yaml(s, 0, 0, 0, false, true, 1.0, null));
+        Solution us = solve(engine, yaml(s, 0, 0, 0, false, true, 1.0, null));
         for (var e : base.reactions().entrySet()) {
             for (int k = 0; k < 3; k++) close(e.getValue()[k], us.reactions().get(e.getKey())[k], sc * (k == 2 ? 10 : 1), "units " + e.getKey());
         }
         // rigid rotation and translation: reactions turn with the model, member forces and moments do not change
         double th = 0.3 + rnd.nextDouble();
-        Solution rot = solve(yaml(s, th, 7.5, -3.25, false, false, 1.0, null));
+        Solution rot = solve(engine, yaml(s, th, 7.5, -3.25, false, false, 1.0, null));
         for (var e : base.reactions().entrySet()) {
             double[] a = e.getValue(), b = rot.reactions().get(e.getKey());
             close(Math.cos(th) * a[0] - Math.sin(th) * a[1], b[0], sc, "rotated Fx");
@@ -157,7 +165,7 @@ class MetamorphicTest {
             }
         }
         // mirror: Fx and Mz change sign; N is unchanged; |M| and the deflection are unchanged
-        Solution mir = solve(yaml(s, 0, 0, 0, true, false, 1.0, null));
+        Solution mir = solve(engine, yaml(s, 0, 0, 0, true, false, 1.0, null));
         for (var e : base.reactions().entrySet()) {
             double[] a = e.getValue(), b = mir.reactions().get(e.getKey());
             close(-a[0], b[0], sc, "mirror Fx");
@@ -175,14 +183,14 @@ class MetamorphicTest {
         List<Integer> perm = new ArrayList<>();
         for (int k = 0; k < n; k++) perm.add(k);
         Collections.shuffle(perm, rnd);
-        Solution ren = solve(yaml(s, 0, 0, 0, false, false, 1.0, perm.stream().mapToInt(Integer::intValue).toArray()));
+        Solution ren = solve(engine, yaml(s, 0, 0, 0, false, false, 1.0, perm.stream().mapToInt(Integer::intValue).toArray()));
         for (int k = 0; k < n; k++) {
             Peaks p = base.members().get("M" + k).peaks(), q = ren.members().get("R" + (n - k)).peaks();
             close(p.value("M_max"), q.value("M_max"), sc * 10, "renamed M_max");
             close(p.value("V_min"), q.value("V_min"), sc, "renamed V_min");
         }
         // linearity
-        Solution twice = solve(yaml(s, 0, 0, 0, false, false, 2.5, null));
+        Solution twice = solve(engine, yaml(s, 0, 0, 0, false, false, 2.5, null));
         for (var e : base.reactions().entrySet()) {
             for (int k = 0; k < 3; k++) close(2.5 * e.getValue()[k], twice.reactions().get(e.getKey())[k], 2.5 * sc * 10, "linearity");
         }
@@ -190,6 +198,10 @@ class MetamorphicTest {
 
     @RepeatedTest(10)
     void splittingAMemberChangesNothing(RepetitionInfo info) {
+        for (Engine engine : ENGINES) splittingAMemberChangesNothing(engine, info);
+    }
+
+    private static void splittingAMemberChangesNothing(Engine engine, RepetitionInfo info) {
         double len = 4 + info.getCurrentRepetition(), w = -7, p = -12;
         String whole = """
                 format: plumbline/1
@@ -214,7 +226,7 @@ class MetamorphicTest {
                 loads:
                   P: {type: other, member_loads: [{members: [M1a, M1b], w: %2$s}, {member: M1b, P: %3$s, at: %4$s}]}
                 """.formatted(f(len), f(w), f(p), f(0.7 * len - cut), f(cut));
-        Solution a = solve(whole), b = solve(split);
+        Solution a = solve(engine, whole), b = solve(engine, split);
         double sc = scaleOf(a);
         for (var e : a.reactions().entrySet()) for (int k = 0; k < 3; k++) close(e.getValue()[k], b.reactions().get(e.getKey())[k], sc * 10, "split reactions");
         Peaks p1 = a.members().get("M1").peaks(), pa = b.members().get("M1a").peaks(), pb = b.members().get("M1b").peaks();
@@ -225,6 +237,10 @@ class MetamorphicTest {
 
     @RepeatedTest(10)
     void superpositionAndReciprocity(RepetitionInfo info) {
+        for (Engine engine : ENGINES) superpositionAndReciprocity(engine, info);
+    }
+
+    private static void superpositionAndReciprocity(Engine engine, RepetitionInfo info) {
         Random rnd = new Random(777L + info.getCurrentRepetition());
         Spec s = random(rnd);
         String base = yaml(s, 0, 0, 0, false, false, 1.0, null);
@@ -237,7 +253,6 @@ class MetamorphicTest {
                 + "  UJ: {type: other, node_loads: [{node: N" + j + ", " + comp[b] + ": 1}]}\n"
                 + "  BOTH: {type: other, node_loads: [{node: N" + i + ", " + comp[a] + ": 1}, {node: N" + j + ", " + comp[b] + ": 1}]}\n";
         Model m = Models.yaml(cases);
-        StiffnessEngine engine = new StiffnessEngine();
         EngineResult r = engine.solve(m);
         double dji = r.cases().get("UI").displacements().get("N" + j)[b], dij = r.cases().get("UJ").displacements().get("N" + i)[a];
         double scale = Math.max(Math.abs(dji), Math.abs(dij));
