@@ -29,6 +29,20 @@ class ReportTest {
 
     static final ObjectMapper JSON = new ObjectMapper();
 
+    /** Every page's text, white space folded, after checking that each page carries "page x of y". */
+    static String text(Path pdf) throws java.io.IOException {
+        PdfReader reader = new PdfReader(Files.readAllBytes(pdf));
+        int pages = reader.getNumberOfPages();
+        PdfTextExtractor ex = new PdfTextExtractor(reader);
+        StringBuilder all = new StringBuilder();
+        for (int p = 1; p <= pages; p++) {
+            String text = ex.getTextFromPage(p);
+            assertTrue(text.contains("page " + p + " of " + pages), "footer on page " + p);
+            all.append(text).append('\n');
+        }
+        return all.toString().replaceAll("\\s+", " ");
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource({
             "footbridge-truss.yaml, footbridge-truss-claims.yaml",
@@ -50,16 +64,7 @@ class ReportTest {
         Set<ValidationMessage> errors = schema.validate(tree);
         assertTrue(errors.isEmpty(), errors.toString());
 
-        PdfReader reader = new PdfReader(Files.readAllBytes(pdf));
-        int pages = reader.getNumberOfPages();
-        PdfTextExtractor ex = new PdfTextExtractor(reader);
-        StringBuilder all = new StringBuilder();
-        for (int p = 1; p <= pages; p++) {
-            String text = ex.getTextFromPage(p);
-            assertTrue(text.contains("page " + p + " of " + pages), "footer on page " + p);
-            all.append(text).append('\n');
-        }
-        String text = all.toString().replaceAll("\\s+", " ");
+        String text = text(pdf);
         for (String section : new String[]{"1 Summary", "2 The model as checked", "3 Determinacy, stability and equilibrium",
                 "4 Claims compared", "5 Queries for the originator", "7 Force-method working", "8 Plausibility warnings",
                 "9 Assumptions and cautions", "10 Sign-off"}) {

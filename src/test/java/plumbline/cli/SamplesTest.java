@@ -48,4 +48,18 @@ class SamplesTest {
         assertEquals(0, r.code(), r.err() + r.out());
         assertTrue(r.out().contains("Claims: 1 ok, 0 marginal, 0 mismatch"), r.out());
     }
+
+    @org.junit.jupiter.api.Test
+    void aCheckWithNoClaimsSaysSoAndIsNeverOk() throws Exception {
+        Path dir = Files.createTempDirectory("plumbline");
+        CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--json", dir.resolve("r.json").toString(),
+                "--pdf", dir.resolve("r.pdf").toString());
+        assertEquals(0, r.code(), "FORMAT.md section 6: no claims exits 0\n" + r.err() + r.out());
+        assertTrue(r.out().contains("Verdict: NO-CLAIMS"), r.out());
+        assertTrue(!r.out().contains("Verdict: OK"), r.out());
+        Map<String, Object> tree = OutputFiles.parseJson(Files.readString(dir.resolve("r.json")));
+        assertEquals("no-claims", tree.get("verdict"));
+        String pdf = ReportTest.text(dir.resolve("r.pdf"));
+        assertTrue(pdf.contains("Verdict: NO-CLAIMS"), pdf);
+    }
 }
