@@ -5,8 +5,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
@@ -17,15 +17,12 @@ final class CheckCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "MODEL", description = "model file (.yaml, .yml or .json)")
-    Path model;
+    @Mixin
+    ModelOptions common;
 
     @Option(names = "--claims", paramLabel = "FILE", arity = "1..*",
             description = "claims file(s): YAML, JSON or CSV (item,combo,name,quantity,value,unit); the model's own claims: are read too")
     List<Path> claims = new ArrayList<>();
-
-    @Option(names = "--json", paramLabel = "FILE", description = "write the results as JSON (FORMAT.md section 5)")
-    Path json;
 
     @Option(names = "--pdf", paramLabel = "FILE", description = "write the PDF discrepancy report")
     Path pdf;
@@ -43,6 +40,7 @@ final class CheckCommand implements Callable<Integer> {
     public Integer call() {
         var out = spec.commandLine().getOut();
         var err = spec.commandLine().getErr();
-        return Run.execute(model, claims, json, pdf, figures, "both", tolerance == null ? Double.NaN : tolerance, true, out, err);
+        return Run.execute(new RunOptions(common.model, claims, common.json, pdf, figures, Method.both,
+                tolerance == null ? Double.NaN : tolerance, true), out, err);
     }
 }

@@ -8,13 +8,20 @@ import picocli.CommandLine.Command;
  * Entry point. Exit codes (FORMAT.md section 6): 0 every claim ok, 1 a claim marginal or
  * mismatched or the model unstable, 2 invalid input, 3 internal error.
  */
-@Command(name = "plumbline", mixinStandardHelpOptions = true, version = "plumbline 1.0.0",
+@Command(name = "plumbline", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Independent check of plane frame, beam and truss models and of the results claimed for them.",
         subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, UnitsCommand.class, SchemaCommand.class, BenchCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 
     public static final int OK = 0, FLAGGED = 1, INPUT = 2, INTERNAL = 3;
+
+    /** The version, from the one place it is written (the results' tool block). */
+    static final class Version implements CommandLine.IVersionProvider {
+        public String[] getVersion() {
+            return new String[]{"plumbline " + plumbline.report.ResultsTree.TOOL_VERSION};
+        }
+    }
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

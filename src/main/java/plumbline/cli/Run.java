@@ -24,10 +24,10 @@ final class Run {
     private Run() {
     }
 
-    static List<Engine> engines(String method, boolean forceFits) {
+    static List<Engine> engines(Method method, boolean forceFits) {
         List<Engine> out = new ArrayList<>();
-        if (method.equals("stiffness") || method.equals("both")) out.add(new StiffnessEngine());
-        if (method.equals("force") || (method.equals("both") && forceFits)) out.add(new ForceEngine());
+        if (method != Method.force) out.add(new StiffnessEngine());
+        if (method == Method.force || (method == Method.both && forceFits)) out.add(new ForceEngine());
         return out;
     }
 
@@ -46,11 +46,12 @@ final class Run {
         return Main.INPUT;
     }
 
-    static int execute(Path model, List<Path> claims, Path json, Path pdf, Path figures, String method, double tolerance, boolean checking,
-                       PrintWriter out, PrintWriter err) {
+    static int execute(RunOptions o, PrintWriter out, PrintWriter err) {
+        Path json = o.json(), pdf = o.pdf(), figures = o.figures();
+        Method method = o.method();
         Inputs in;
         try {
-            in = Inputs.load(model, claims);
+            in = Inputs.load(o.model(), o.claims());
             if (json != null) OutputFiles.refuseInputs(json, in.files, "--json");
             if (pdf != null) OutputFiles.refuseInputs(pdf, in.files, "--pdf");
             if (figures != null && !java.nio.file.Files.isDirectory(figures)) {
@@ -61,21 +62,23 @@ final class Run {
             return inputProblems(e, err);
         }
         String tooLarge = ForceEngine.tooLarge(in.model);
-        if (method.equals("force") && tooLarge != null) {
-            err.println("plumbline: " + tooLarge + "; use --method stiffness (nothing was written)");
-            return Main.INTERNAL;
+        if (method == Method.force && tooLarge != null) {
+            // the request cannot be honoured for this model: a usage problem, not an internal error
+            err.println("plumbline: --method force: " + tooLarge + "; use --method stiffness or both (nothing was written)");
+            return Main.INPUT;
         }
         Analysis a = Analysis.of(in.model, engines(method, tooLarge == null));
         List<String> notes = new ArrayList<>();
-        if (method.equals("both") && tooLarge != null) {
+        if (method == Method.both && tooLarge != null) {
             notes.add("force method not run: " + tooLarge + "; the results are the stiffness method's alone, unconfirmed by a second method");
         }
         if (!a.engines().isEmpty() && a.solutions().isEmpty() && a.stable()) {
             for (var e : a.engines().values()) err.println("plumbline: " + e.engine() + " method not run: " + e.instability());
-            err.println("plumbline: no requested method solved this model; nothing was written (try --method stiffness)");
-            return Main.INTERNAL;
+            err.println("plumbline: --method " + method + ": no requested method solved this model; nothing was written "
+                    + "(try --method stiffness)");
+            return Main.INPUT;
         }
-        Review r = Review.of(a, new TolerancePolicy(tolerance), new StiffnessEngine());
+        Review r = Review.of(a, new TolerancePolicy(o.tolerance()), new StiffnessEngine());
         String shown = a.primaryEngine();
         Double agreement = r.safeguards().agreement();
         for (var e : a.engines().values()) {
@@ -125,7 +128,7 @@ final class Run {
             }
         }
         out.print(Console.summary(r, a.solutions().isEmpty() ? "none" : names, agreement));
-        if (!checking) out.print(Console.results(r));
+        if (!o.checking()) out.print(Console.results(r));
         for (String n : notes) out.print(Console.wrap("Note: " + n, "  "));
         if (json != null) out.println("Results written to " + json);
         if (pdf != null) out.println("Report written to " + pdf);

@@ -4,8 +4,8 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
@@ -13,24 +13,19 @@ import picocli.CommandLine.Model.CommandSpec;
         description = "Solve the model and print or write its reactions, member peaks and displacements.")
 final class SolveCommand implements Callable<Integer> {
 
-    enum Method { stiffness, force, both }
-
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "MODEL", description = "model file (.yaml, .yml or .json)")
-    Path model;
+    @Mixin
+    ModelOptions common;
 
     @Option(names = "--method", paramLabel = "METHOD", defaultValue = "both",
             description = "stiffness, force or both (default: ${DEFAULT-VALUE}); with both the JSON reports their agreement")
     Method method;
 
-    @Option(names = "--json", paramLabel = "FILE", description = "write the results as JSON (FORMAT.md section 5)")
-    Path json;
-
     @Override
     public Integer call() {
-        return Run.execute(model, List.of(), json, null, null, method.name(), Double.NaN, false, spec.commandLine().getOut(),
-                spec.commandLine().getErr());
+        return Run.execute(new RunOptions(common.model, List.of(), common.json, null, null, method, Double.NaN, false),
+                spec.commandLine().getOut(), spec.commandLine().getErr());
     }
 }
