@@ -5,7 +5,7 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /**
- * Entry point. Exit codes (FORMAT.md section 6): 0 every claim ok, 1 a claim marginal or
+ * Entry point. Exit codes (format reference, src/site/markdown/formats.md section 6): 0 every claim ok, 1 a claim marginal or
  * mismatched or the model unstable, 2 invalid input, 3 internal error.
  */
 @Command(name = "plumbline", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
