@@ -23,7 +23,7 @@ import plumbline.units.UnitSystem;
 import plumbline.units.Units;
 
 /**
- * Reads claims (FORMAT.md section 4) from a model's {@code claims:} key, a YAML or JSON
+ * Reads claims (format reference (src/site/markdown/formats.md) section 4) from a model's {@code claims:} key, a YAML or JSON
  * claims file, or a CSV file with the header {@code item,combo,name,quantity,value,unit}.
  * Values are converted to SI from the claims' own units.
  */

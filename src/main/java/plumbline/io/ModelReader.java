@@ -34,7 +34,7 @@ import plumbline.units.UnitSystem;
 import plumbline.units.Units;
 
 /**
- * Reads a model file (FORMAT.md sections 1 to 4) into a {@link Model} in SI units. Every
+ * Reads a model file (format reference (src/site/markdown/formats.md) sections 1 to 4) into a {@link Model} in SI units. Every
  * problem is collected with its file, line and column before one {@link InputException}
  * is thrown; nothing is half-read.
  */

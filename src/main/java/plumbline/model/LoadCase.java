@@ -2,7 +2,7 @@ package plumbline.model;
 
 import java.util.List;
 
-/** A named load case (FORMAT.md section 2). */
+/** A named load case (format reference (src/site/markdown/formats.md) section 2). */
 public record LoadCase(String name, String type, boolean selfWeight, boolean pattern,
                        List<MemberLoad> memberLoads, List<NodeLoad> nodeLoads,
                        List<Temperature> temperatures, List<Settlement> settlements, SourceRef at) {

@@ -1,6 +1,6 @@
 package plumbline.model;
 
-/** Direction of a member load (FORMAT.md section 2). GRAVITY is -y; a positive value acts downward. */
+/** Direction of a member load (format reference (src/site/markdown/formats.md) section 2). GRAVITY is -y; a positive value acts downward. */
 public enum LoadDirection {
     X("x"), Y("y"), LOCAL_X("local-x"), LOCAL_Y("local-y"), GRAVITY("gravity");
 

@@ -20,7 +20,7 @@ import plumbline.units.Dimension;
 import plumbline.units.UnitSystem;
 
 /**
- * The results of FORMAT.md section 5 as a plain tree of maps, lists, strings and numbers
+ * The results of format reference (src/site/markdown/formats.md) section 5 as a plain tree of maps, lists, strings and numbers
  * (in the model's units), ready for the JSON writer. No NaN or infinity is ever put in:
  * a value that is not finite becomes null.
  */

@@ -1,7 +1,7 @@
 package plumbline.review;
 
 /**
- * The verdict of a run (FORMAT.md section 5), most severe first. A run whose own safeguards
+ * The verdict of a run (format reference (src/site/markdown/formats.md) section 5), most severe first. A run whose own safeguards
  * fail (the model cannot carry load, the two methods disagree, a solution is out of
  * equilibrium) says so before anything about the claims: none of its numbers can be
  * vouched for. A run with no claims is never "ok": nothing was compared.

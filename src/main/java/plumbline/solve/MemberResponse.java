@@ -7,7 +7,7 @@ import java.util.TreeSet;
  * Exact internal forces and transverse displacement along one member, from the forces
  * that act on its start and the loads along it.
  *
- * <p>Signs (FORMAT.md section 4): N is tension positive; M is positive when it puts the
+ * <p>Signs (format reference (src/site/markdown/formats.md) section 4): N is tension positive; M is positive when it puts the
  * local -y face in tension; V = dM/dx. With q the transverse and p the axial load
  * intensity (local +y and +x), dV/dx = q, dN/dx = -p; a point force Q (local +y) raises V
  * by Q, an axial point force P lowers N by P, a counter-clockwise couple C lowers M by C.
@@ -87,7 +87,7 @@ public record MemberResponse(Piecewise axial, Piecewise shear, Piecewise moment,
         return new MemberResponse(new Piecewise(x, np), new Piecewise(x, vp), new Piecewise(x, mp), new Piecewise(x, wp));
     }
 
-    /** Peaks of FORMAT.md section 4, exact, in SI, with their positions along the member. */
+    /** Peaks of format reference (src/site/markdown/formats.md) section 4, exact, in SI, with their positions along the member. */
     public Peaks peaks() {
         Piecewise.Extreme nMax = axial.max(), nMin = axial.min();
         Piecewise.Extreme vMax = shear.max(), vMin = shear.min();

@@ -1,7 +1,7 @@
 package plumbline.units;
 
 /**
- * The units of every bare number in a file (FORMAT.md section 1): a force unit and a length
+ * The units of every bare number in a file (format reference (src/site/markdown/formats.md) section 1): a force unit and a length
  * unit, carried to derived dimensions. Bare angles and rotations are in radians (a
  * support's {@code angle} alone reads a bare number as degrees), bare temperatures in degC.
  */

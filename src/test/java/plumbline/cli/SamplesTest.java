@@ -54,7 +54,7 @@ class SamplesTest {
         Path dir = Files.createTempDirectory("plumbline");
         CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--json", dir.resolve("r.json").toString(),
                 "--pdf", dir.resolve("r.pdf").toString());
-        assertEquals(0, r.code(), "FORMAT.md section 6: no claims exits 0\n" + r.err() + r.out());
+        assertEquals(0, r.code(), "format reference (src/site/markdown/formats.md) section 6: no claims exits 0\n" + r.err() + r.out());
         assertTrue(r.out().contains("Verdict: NO-CLAIMS"), r.out());
         assertTrue(!r.out().contains("Verdict: OK"), r.out());
         Map<String, Object> tree = OutputFiles.parseJson(Files.readString(dir.resolve("r.json")));

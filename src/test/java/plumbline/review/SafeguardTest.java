@@ -201,7 +201,7 @@ class SafeguardTest {
                 """);
         Review r = Review.of(Analysis.of(bare, List.of(new StiffnessEngine(), new ForceEngine())), TolerancePolicy.none());
         assertEquals(Verdict.NO_CLAIMS, r.verdict());
-        assertFalse(r.verdict().flagged, "exit 0: a solve is not a failure (FORMAT.md section 6)");
+        assertFalse(r.verdict().flagged, "exit 0: a solve is not a failure (format reference (src/site/markdown/formats.md) section 6)");
         String console = plumbline.report.Console.summary(r, "both", r.safeguards().agreement());
         assertTrue(console.contains("Verdict: NO-CLAIMS"), console);
         assertFalse(console.contains("Verdict: OK"), console);

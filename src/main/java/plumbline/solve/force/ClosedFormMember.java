@@ -17,7 +17,7 @@ import plumbline.solve.Piecewise;
  * {@code Piecewise.Extreme} that {@code Peaks} is made of is shared): the two methods'
  * agreement then covers the member mechanics too.
  *
- * <p>Signs as FORMAT.md section 4: N tension positive, M positive when the local -y face is
+ * <p>Signs as format reference (src/site/markdown/formats.md) section 4: N tension positive, M positive when the local -y face is
  * in tension, V = dM/dx, with the forces on the start (fx, fy, m, local, acting on the
  * member) giving N(0+) = -fx, V(0+) = fy, M(0+) = -m. Every function is a sum of terms
  * c &lt;x - a&gt;^k, where &lt;x - a&gt;^k is (x - a)^k for x past a and 0 before it:
