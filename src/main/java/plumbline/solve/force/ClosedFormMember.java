@@ -195,29 +195,53 @@ final class ClosedFormMember {
             add(out, -c[0] / c[1], span, x0);
             return out;
         }
-        double[] coefficients = java.util.Arrays.copyOf(c, top + 1);
-        try {
-            for (Complex r : new LaguerreSolver().solveAllComplex(coefficients, span / 2)) add(out, r.getReal(), span, x0);
-        } catch (RuntimeException notConverged) {
-            // bracket sign changes of the derivative on a fine grid and bisect (a safe, slower route)
-            int cells = 256;
-            for (int i = 0; i < cells; i++) {
-                double a = span * i / cells, b = span * (i + 1) / cells;
-                double fa = horner(coefficients, a), fb = horner(coefficients, b);
-                if (fa == 0) add(out, a, span, x0);
-                if (fa * fb >= 0) continue;
-                for (int it = 0; it < 100; it++) {
-                    double mid = 0.5 * (a + b), fm = horner(coefficients, mid);
-                    if (fa * fm <= 0) b = mid;
-                    else {
-                        a = mid;
-                        fa = fm;
-                    }
-                }
-                add(out, 0.5 * (a + b), span, x0);
-            }
-        }
+        for (double u : realRoots(java.util.Arrays.copyOf(c, top + 1), span)) add(out, u, span, x0);
         return out;
+    }
+
+    /**
+     * The real parts of the roots of the polynomial with these coefficients (constant first,
+     * degree 2 or more), by Laguerre's method; should it not converge, the roots found by
+     * bracketing on [0, span] ({@link #bracketedRoots}). Roots outside the span are harmless:
+     * the caller keeps those inside.
+     */
+    static double[] realRoots(double[] coefficients, double span) {
+        try {
+            Complex[] roots = new LaguerreSolver().solveAllComplex(coefficients, span / 2);
+            double[] out = new double[roots.length];
+            for (int i = 0; i < roots.length; i++) out[i] = roots[i].getReal();
+            return out;
+        } catch (RuntimeException notConverged) {
+            return bracketedRoots(coefficients, span);
+        }
+    }
+
+    /** Cells of the bracketing grid: roots closer together than span / 256 may merge (a safe, slower route). */
+    static final int BRACKETS = 256;
+
+    /** Roots of the polynomial in [0, span]: sign changes on a fine grid, each bisected to rounding. */
+    static double[] bracketedRoots(double[] coefficients, double span) {
+        List<Double> out = new ArrayList<>();
+        for (int i = 0; i < BRACKETS; i++) {
+            double a = span * i / BRACKETS, b = span * (i + 1) / BRACKETS;
+            double fa = horner(coefficients, a), fb = horner(coefficients, b);
+            if (fa == 0) {
+                out.add(a);
+                continue;
+            }
+            if (fa * fb > 0 || fb == 0) continue;
+            for (int it = 0; it < 100; it++) {
+                double mid = 0.5 * (a + b), fm = horner(coefficients, mid);
+                if (fa * fm <= 0) b = mid;
+                else {
+                    a = mid;
+                    fa = fm;
+                }
+            }
+            out.add(0.5 * (a + b));
+        }
+        if (horner(coefficients, span) == 0) out.add(span);
+        return out.stream().mapToDouble(Double::doubleValue).toArray();
     }
 
     private static void add(List<Double> out, double u, double span, double x0) {
