@@ -7,8 +7,7 @@ import plumbline.model.Member;
 import plumbline.model.Model;
 import plumbline.model.Node;
 import plumbline.model.NodeLoad;
-import plumbline.model.LoadDirection;
-import plumbline.model.MemberLoad;
+import plumbline.statics.AppliedLoads;
 
 /**
  * The equilibrium check run on every solution, whichever engine made it: each member must
@@ -47,14 +46,14 @@ public final class Equilibrium {
     /**
      * The largest imbalance of solution {@code s} under the load cases {@code factors} (case
      * name to factor), relative to the largest force in play (moments divided by the model's
-     * extent). Each member's loads are resolved here straight from the model's load records
-     * (global components, positions along the member, per-plan intensities, self-weight), by
-     * code of its own, so a slip in the load description the engines share shows as an
-     * imbalance rather than being balanced by both engines alike.
+     * extent). Each member's loads are resolved straight from the model's load records
+     * (global components, positions along the member, per-plan intensities, self-weight) by
+     * statics ({@link AppliedLoads#memberResultants}), not by the load description the engines
+     * share, so a slip there shows as an imbalance rather than being balanced by both alike.
      */
     public static double residual(Model model, Solution s, Map<String, Double> factors) {
         double lc = model.extentM();
-        Map<String, double[]> memberLoads = memberLoadResultants(model, factors);
+        Map<String, double[]> memberLoads = AppliedLoads.memberResultants(model, factors);
         Map<String, double[]> sum = new HashMap<>();
         double scale = 0, worst = 0;
         for (var e : nodeLoads(model, factors).entrySet()) {
@@ -107,72 +106,4 @@ public final class Equilibrium {
         return Math.max(Math.hypot(forceAndMoment[0], forceAndMoment[1]), Math.abs(forceAndMoment[2]) / lengthScaleM);
     }
 
-    /**
-     * The resultant of every member's loads under the factored cases, global {Fx, Fy} (N) and
-     * the moment about the member's start (N*m, counter-clockwise), from the model's load
-     * records. A load of intensity w along unit direction (ux, uy), at distance s from the start
-     * along the member's unit vector (cx, cy), has the moment s (cx uy - cy ux) w about it.
-     * Linear intensities are integrated by the trapezoid rule (force) and Simpson's rule
-     * (moment: w(s) s is quadratic), both exact here.
-     */
-    static Map<String, double[]> memberLoadResultants(Model model, Map<String, Double> factors) {
-        Map<String, double[]> out = new HashMap<>();
-        for (var f : factors.entrySet()) {
-            LoadCase c = model.loadCase(f.getKey());
-            double k = f.getValue();
-            if (k == 0) continue;
-            for (MemberLoad l : c.memberLoads()) {
-                Member m = model.member(l.member());
-                double[] u = unitVector(model, m);
-                double[] r = out.computeIfAbsent(m.name(), x -> new double[3]);
-                if (l instanceof MemberLoad.Distributed w) {
-                    double[] g = globalDirection(w.dir(), u);
-                    double perLength = w.perPlan() ? Math.abs(u[0]) : 1.0; // per plan: |cx| as much per member length
-                    double w1 = k * perLength * w.w1NPerM(), w2 = k * perLength * w.w2NPerM();
-                    double a = w.fromM(), b = w.toM(), mid = 0.5 * (a + b);
-                    double force = 0.5 * (w1 + w2) * (b - a);
-                    double firstMoment = (b - a) / 6 * (w1 * a + 4 * (0.5 * (w1 + w2)) * mid + w2 * b);
-                    r[0] += force * g[0];
-                    r[1] += force * g[1];
-                    r[2] += firstMoment * (u[0] * g[1] - u[1] * g[0]);
-                } else if (l instanceof MemberLoad.Point p) {
-                    double[] g = globalDirection(p.dir(), u);
-                    double force = k * p.forceN();
-                    r[0] += force * g[0];
-                    r[1] += force * g[1];
-                    r[2] += p.atM() * force * (u[0] * g[1] - u[1] * g[0]);
-                } else if (l instanceof MemberLoad.Couple cp) {
-                    r[2] += k * cp.momentNm();
-                }
-            }
-            if (c.selfWeight()) {
-                for (Member m : model.members().values()) {
-                    double w = k * model.materialOf(m).weightDensityNPerM3() * model.sectionOf(m).areaM2();
-                    if (w == 0) continue;
-                    double len = model.lengthM(m), cx = unitVector(model, m)[0];
-                    double[] r = out.computeIfAbsent(m.name(), x -> new double[3]);
-                    r[1] -= w * len;              // downward, acting at mid-length
-                    r[2] -= w * len * cx * len / 2; // moment about the start: (L/2) cx times -wL
-                }
-            }
-        }
-        return out;
-    }
-
-    private static double[] unitVector(Model model, Member m) {
-        Node a = model.node(m.from()), b = model.node(m.to());
-        double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
-        return new double[]{dx / len, dy / len};
-    }
-
-    /** The global unit vector of a load direction on a member of unit vector u. */
-    private static double[] globalDirection(LoadDirection d, double[] u) {
-        return switch (d) {
-            case X -> new double[]{1, 0};
-            case Y -> new double[]{0, 1};
-            case GRAVITY -> new double[]{0, -1};
-            case LOCAL_X -> new double[]{u[0], u[1]};
-            case LOCAL_Y -> new double[]{-u[1], u[0]};
-        };
-    }
 }

@@ -1,5 +1,6 @@
 package plumbline.statics;
 
+import java.util.LinkedHashMap;
 import java.util.Map;
 import plumbline.model.LoadCase;
 import plumbline.model.LoadDirection;
@@ -11,9 +12,11 @@ import plumbline.model.NodeLoad;
 
 /**
  * Global resultant of the applied loads of a factored set of load cases, worked out here
- * from the model alone (not from either engine): total Fx, Fy (N) and moment (N*m, ccw)
- * about a reference point, and the sum of the magnitudes of all applied forces, the scale
- * against which residuals are judged.
+ * from the model alone (not from either engine, nor from the load description they share):
+ * total Fx, Fy (N) and moment (N*m, ccw) about a reference point, and the sum of the
+ * magnitudes of all applied forces, the scale against which residuals are judged. The
+ * equilibrium check of every solution takes each member's share from
+ * {@link #memberResultants}.
  */
 public record AppliedLoads(double fxN, double fyN, double momentNm, double magnitudeN) {
 
@@ -29,13 +32,39 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
                 mz += k * ((n.xM() - refX) * nl.fyN() - (n.yM() - refY) * nl.fxN() + nl.mzNm());
                 mag += Math.abs(k) * Math.hypot(nl.fxN(), nl.fyN());
             }
+        }
+        for (var e : memberResultants(model, factors).entrySet()) {
+            Node a = model.node(model.member(e.getKey()).from());
+            double[] r = e.getValue();
+            fx += r[0];
+            fy += r[1];
+            // moved from the member's start to the reference point: M_ref = M_start + (start - ref) x F
+            mz += r[2] + (a.xM() - refX) * r[1] - (a.yM() - refY) * r[0];
+            mag += r[3];
+        }
+        return new AppliedLoads(fx, fy, mz, mag);
+    }
+
+    /**
+     * The resultant of each member's loads under the factored cases, from the model's load
+     * records alone: {Fx, Fy} (N, global), the moment about the member's start (N*m, ccw) and
+     * the sum of the magnitudes of its loads (N). A load of intensity w along the global unit
+     * vector d, at distance s along the member's unit vector e, contributes w d ds and the
+     * moment (e x d) w s ds; per-plan intensities are |e_x| as much per member length;
+     * self-weight acts downward at mid-length. Members with no load are absent.
+     */
+    public static Map<String, double[]> memberResultants(Model model, Map<String, Double> factors) {
+        Map<String, double[]> out = new LinkedHashMap<>();
+        for (var f : factors.entrySet()) {
+            LoadCase c = model.loadCase(f.getKey());
+            double k = f.getValue();
             for (MemberLoad l : c.memberLoads()) {
                 Member m = model.member(l.member());
                 Node a = model.node(m.from()), b = model.node(m.to());
                 double len = model.lengthM(m), ex = (b.xM() - a.xM()) / len, ey = (b.yM() - a.yM()) / len;
-                double ox = a.xM() - refX, oy = a.yM() - refY;
+                double[] r = out.computeIfAbsent(m.name(), x -> new double[4]);
                 if (l instanceof MemberLoad.Couple cp) {
-                    mz += k * cp.momentNm();
+                    r[2] += k * cp.momentNm();
                     continue;
                 }
                 double total, firstMoment; // integral of w ds and of w s ds along the member
@@ -53,24 +82,24 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
                     firstMoment = p.forceN() * p.atM();
                     d = unit(p.dir(), ex, ey);
                 }
-                fx += k * total * d[0];
-                fy += k * total * d[1];
-                // moment of w d ds at a + s e about the reference: (o x d) total + (e x d) first moment
-                mz += k * ((ox * d[1] - oy * d[0]) * total + (ex * d[1] - ey * d[0]) * firstMoment);
-                mag += Math.abs(k * total);
+                r[0] += k * total * d[0];
+                r[1] += k * total * d[1];
+                r[2] += k * (ex * d[1] - ey * d[0]) * firstMoment;
+                r[3] += Math.abs(k * total);
             }
             if (c.selfWeight()) {
                 for (Member m : model.members().values()) {
-                    Node a = model.node(m.from()), b = model.node(m.to());
                     double w = model.materialOf(m).weightDensityNPerM3() * model.sectionOf(m).areaM2() * model.lengthM(m);
-                    double cx = 0.5 * (a.xM() + b.xM()) - refX;
-                    fy -= k * w;
-                    mz -= k * w * cx;
-                    mag += Math.abs(k * w);
+                    if (w == 0) continue;
+                    Node a = model.node(m.from()), b = model.node(m.to());
+                    double[] r = out.computeIfAbsent(m.name(), x -> new double[4]);
+                    r[1] -= k * w;
+                    r[2] -= k * w * 0.5 * (b.xM() - a.xM()); // acting at mid-length: lever arm half the member's x extent
+                    r[3] += Math.abs(k * w);
                 }
             }
         }
-        return new AppliedLoads(fx, fy, mz, mag);
+        return out;
     }
 
     /** Unit vector of a load direction on a member with unit vector (ex, ey); gravity is -y. */
