@@ -1,6 +1,5 @@
 package plumbline.solve;
 
-import java.util.Arrays;
 import java.util.TreeSet;
 
 /**
@@ -96,10 +95,5 @@ public record MemberResponse(Piecewise axial, Piecewise shear, Piecewise moment,
         Piecewise.Extreme defl = Math.abs(dMin.value()) > Math.abs(dMax.value())
                 ? new Piecewise.Extreme(Math.abs(dMin.value()), dMin.xM()) : new Piecewise.Extreme(Math.abs(dMax.value()), dMax.xM());
         return new Peaks(nMax, nMin, vMax, vMin, mMax, mMin, defl);
-    }
-
-    @Override
-    public String toString() {
-        return "MemberResponse" + Arrays.toString(moment.breakpoints());
     }
 }

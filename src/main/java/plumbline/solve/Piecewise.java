@@ -34,10 +34,6 @@ public final class Piecewise {
         return pieces[k];
     }
 
-    public double length() {
-        return x[x.length - 1];
-    }
-
     /** Value at x, taking the segment to the right at an interior breakpoint. */
     public double at(double xm) {
         int k = Arrays.binarySearch(x, xm);
@@ -87,12 +83,6 @@ public final class Piecewise {
             }
         }
         return new Extreme(best, where);
-    }
-
-    public double integrate() {
-        double s = 0;
-        for (int k = 0; k < pieces.length; k++) s += pieces[k].integrate(x[k + 1] - x[k]);
-        return s;
     }
 
     public double[] breakpoints() {
