@@ -19,8 +19,8 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
 
     /**
      * The run's own checks: the largest relative difference between the two methods over
-     * every load case (null when only one ran) and the largest equilibrium residual of any
-     * solution of any engine (load cases, combinations, pattern parts).
+     * every load case and every solution of every load set (null when only one ran), and the
+     * largest equilibrium residual of any of those solutions of any engine.
      */
     public record Safeguards(Double agreement, double worstResidual, String worstResidualAt) {
         public boolean enginesAgree() {
@@ -38,19 +38,11 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
             }
             double worst = 0;
             String at = "";
-            for (var e : a.solutions().entrySet()) {
-                for (Solution s : a.engines().get(e.getKey()).cases().values()) {
-                    if (!(s.equilibriumResidual() <= worst)) {
+            for (String engine : a.solutions().keySet()) {
+                for (Solution s : everySolution(a, engine).values()) {
+                    if (!(s.equilibriumResidual() <= worst)) { // a NaN residual is the worst of all
                         worst = s.equilibriumResidual();
-                        at = e.getKey() + " method, " + s.name();
-                    }
-                }
-                for (LoadSetResult r : e.getValue().values()) {
-                    for (Solution s : r.solutions()) {
-                        if (!(s.equilibriumResidual() <= worst)) {
-                            worst = s.equilibriumResidual();
-                            at = e.getKey() + " method, " + s.name();
-                        }
+                        at = engine + " method, " + s.name();
                     }
                 }
             }
