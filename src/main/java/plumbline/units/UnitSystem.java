@@ -40,6 +40,7 @@ public record UnitSystem(Unit force, Unit length) {
         if (d.temperature() != 0) part(d.temperature(), "degC", num, den);
         String n = num.length() == 0 ? "1" : num.toString();
         if (d.equals(Dimension.NONE)) return "";
+        if (d.equals(Dimension.ANGLE)) return "rad"; // a rotation on its own, not a stiffness per radian
         return den.length() == 0 ? n : n + "/" + den;
     }
 
