@@ -243,21 +243,15 @@ public final class Determinacy {
         }
         double scale = maxT > 1e-9 * maxR * lc ? maxT : maxR;
         for (double[] d : motion.values()) for (int k = 0; k < 3; k++) d[k] = Math.abs(d[k] / scale) < 1e-9 ? 0 : d[k] / scale;
+        // Each member-end moment (or rotational reaction) enters its node's moment row with a
+        // coefficient of one and otherwise only translation rows, so a motion with no translation
+        // has no rotation either: some node always moves.
         List<String> moving = new ArrayList<>();
-        List<String> spinning = new ArrayList<>();
-        for (var e : motion.entrySet()) {
-            if (Math.hypot(e.getValue()[0], e.getValue()[1]) > 1e-6) moving.add(e.getKey());
-            else if (Math.abs(e.getValue()[2]) > 1e-6) spinning.add(e.getKey());
-        }
-        String text;
-        if (moving.isEmpty()) {
-            text = "node" + (spinning.size() > 1 ? "s " : " ") + String.join(", ", spinning)
-                    + (spinning.size() > 1 ? " can rotate" : " can rotate") + " freely (nothing resists a moment there)";
-        } else if (moving.size() == 1) {
+        for (var e : motion.entrySet()) if (Math.hypot(e.getValue()[0], e.getValue()[1]) > 1e-6) moving.add(e.getKey());
+        String text = members(model, motion, lc);
+        if (moving.size() == 1) {
             double[] d = motion.get(moving.get(0));
-            text = "node " + moving.get(0) + " can translate " + direction(d[0], d[1]) + ": " + members(model, motion, lc);
-        } else {
-            text = members(model, motion, lc);
+            text = "node " + moving.get(0) + " can translate " + direction(d[0], d[1]) + ": " + text;
         }
         java.util.Map<String, double[]> kept = new java.util.LinkedHashMap<>();
         for (var e : motion.entrySet()) {

@@ -91,4 +91,63 @@ class MechanismWordsTest {
         assertEquals("", ok.remark());
         assertTrue(ok.conditionRatio() > Determinacy.NEAR_MECHANISM);
     }
+
+    @Test
+    void aBeamSwingingAboutItsOnlyPinTurnsAsOneBody() {
+        // a 6 m frame member pinned at A and free at B swings about A: B moves vertically by L theta,
+        // so at unit translation of B both ends turn by theta = 1/6 rad, anticlockwise when B rises (rigid-body kinematics)
+        Model m = model("nodes: {A: [0,0]; B: [6,0]}\nsupports: {A: pinned}\nmembers: {M1: {from: A; to: B; section: G}}");
+        for (Determinacy.Result r : List.of(Determinacy.of(m), Determinacy.sparse(m, EquilibriumMatrix.of(m)))) {
+            var shape = r.shapes().get(0);
+            double[] a = shape.motion().get("A"), b = shape.motion().get("B");
+            assertEquals(0, a[0], 1e-12);
+            assertEquals(0, a[1], 1e-12);
+            assertEquals(0, b[0], 1e-12);
+            assertEquals(1, Math.abs(b[1]), 1e-12);
+            assertEquals(b[1] / 6, a[2], 1e-12, "A turns by uy_B / L");
+            assertEquals(b[1] / 6, b[2], 1e-12, "B turns with the member");
+        }
+    }
+
+    @Test
+    void theDenseAndSparsePathsFindTheSameMotions() {
+        // the reduced row-echelon basis of a mechanism space is unique, so both paths must give the same shapes
+        Model m = model("nodes: {A: [0,0]; B: [4,0]; C: [4,4]; D: [0,4]; E: [10,0]; F: [16,0]}\n"
+                + "supports: {A: pinned; B: roller; E: roller; F: roller}\n"
+                + "members: {T1: {from: A; to: B; section: G; truss: true}; T2: {from: B; to: C; section: G; truss: true}; "
+                + "T3: {from: C; to: D; section: G; truss: true}; T4: {from: D; to: A; section: G; truss: true}; "
+                + "M5: {from: E; to: F; section: G}}");
+        Determinacy.Result dense = Determinacy.of(m), sparse = Determinacy.sparse(m, EquilibriumMatrix.of(m));
+        assertEquals(2, dense.mechanisms());
+        assertEquals(dense.shapes().size(), sparse.shapes().size());
+        for (int k = 0; k < dense.shapes().size(); k++) {
+            var d = dense.shapes().get(k);
+            var s = sparse.shapes().get(k);
+            assertEquals(d.description(), s.description());
+            assertEquals(d.motion().keySet(), s.motion().keySet());
+            for (String node : d.motion().keySet()) {
+                for (int c = 0; c < 3; c++) {
+                    assertEquals(d.motion().get(node)[c], s.motion().get(node)[c], 1e-9, node + " component " + c);
+                }
+            }
+        }
+    }
+
+    @ParameterizedTest(name = "({0}, {1}) {2}")
+    @CsvSource(delimiter = '|', textBlock = """
+            1    | 0       | horizontally
+            -1   | 0       | horizontally
+            1    | 1.0e-6  | horizontally
+            -1   | 1.0e-6  | horizontally
+            0    | 1       | vertically
+            0    | -1      | vertically
+            1    | 1       | along a line at 45.0 deg to the x axis
+            -1   | 1       | along a line at 135.0 deg to the x axis
+            1    | -1      | along a line at 135.0 deg to the x axis
+            -4   | 3       | along a line at 143.1 deg to the x axis
+            """)
+    void aDirectionIsALineNotASense(double dx, double dy, String words) {
+        // a line through the origin at angle a and at a + 180 deg is the same line: the angle is taken in [0, 180)
+        assertEquals(words, Determinacy.direction(dx, dy));
+    }
 }
