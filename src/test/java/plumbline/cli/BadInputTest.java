@@ -20,6 +20,10 @@ import org.junit.jupiter.params.provider.MethodSource;
  */
 class BadInputTest {
 
+    /** A fresh folder per test, removed afterwards. */
+    @org.junit.jupiter.api.io.TempDir
+    Path tempDir;
+
     static final Path DIR = Path.of("src/test/resources/bad-inputs");
 
     static Stream<Path> catalogue() throws IOException {
@@ -40,7 +44,7 @@ class BadInputTest {
         String first = new String(bytes, 0, nl, java.nio.charset.StandardCharsets.UTF_8);
         assertTrue(first.startsWith("# expect: "), "first line names the expected fragment");
         String fragment = first.substring("# expect: ".length());
-        Path json = Files.createTempDirectory("plumbline").resolve("out.json");
+        Path json = tempDir.resolve("out.json");
         CliRunner r = CliRunner.run("check", file.toString(), "--json", json.toString());
         assertEquals(2, r.code(), r.err());
         assertTrue(r.err().contains(fragment), "expected '" + fragment + "' in:\n" + r.err());
@@ -52,7 +56,7 @@ class BadInputTest {
 
     @Test
     void csvClaimsProblemsNameTheLine() throws IOException {
-        Path dir = Files.createTempDirectory("plumbline");
+        Path dir = tempDir;
         Path csv = dir.resolve("claims.csv");
         Files.writeString(csv, "item,combo,name,quantity,value,unit\nreaction,SLS,A,Fy,12,kN\nreaction,SLS,B,Fy,ten,kN\n");
         CliRunner r = CliRunner.run("check", "samples/three-span-beam.yaml", "--claims", csv.toString());
@@ -62,7 +66,7 @@ class BadInputTest {
 
     @Test
     void outputOverAnInputIsRefused() throws IOException {
-        Path dir = Files.createTempDirectory("plumbline");
+        Path dir = tempDir;
         Path model = dir.resolve("m.yaml");
         Files.copy(Path.of("samples/portal-frame.yaml"), model);
         byte[] before = Files.readAllBytes(model);

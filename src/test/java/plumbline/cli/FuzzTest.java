@@ -28,6 +28,10 @@ import org.junit.jupiter.api.Test;
  */
 class FuzzTest {
 
+    /** A fresh folder per test, removed afterwards. */
+    @org.junit.jupiter.api.io.TempDir
+    Path tempDir;
+
     static final int ITERATIONS = Integer.getInteger("plumbline.fuzz.iterations", 300);
     static final long SEED = Long.getLong("plumbline.fuzz.seed", 1_2026_1201L);
     static final String[] NUMBERS = {"0", "-0", "1e308", "-1e308", "1e-308", "NaN", ".nan", "-.inf", "1e999", "abc", "", "[]",
@@ -95,7 +99,7 @@ class FuzzTest {
     void mutantsGiveAResultOrACleanInputError() throws Exception {
         List<Path> seeds = seeds();
         Random rnd = new Random(SEED);
-        Path dir = Files.createTempDirectory("plumbline-fuzz");
+        Path dir = tempDir;
         ExecutorService pool = Executors.newSingleThreadExecutor();
         int inputErrors = 0;
         try {

@@ -27,6 +27,10 @@ import plumbline.report.Console;
  */
 class ReportTest {
 
+    /** A fresh folder per test, removed afterwards. */
+    @org.junit.jupiter.api.io.TempDir
+    Path tempDir;
+
     static final ObjectMapper JSON = new ObjectMapper();
 
     /** Every page's text, white space folded, after checking that each page carries "page x of y". */
@@ -53,7 +57,7 @@ class ReportTest {
             "../checks/20-two-span-pattern-live.yaml, ",
     })
     void pdfAndJsonAgree(String model, String claims) throws Exception {
-        Path dir = Files.createTempDirectory("plumbline");
+        Path dir = tempDir;
         Path json = dir.resolve("r.json"), pdf = dir.resolve("r.pdf");
         CliRunner r = claims == null
                 ? CliRunner.run("check", "samples/" + model, "--json", json.toString(), "--pdf", pdf.toString())
@@ -90,7 +94,7 @@ class ReportTest {
 
     @org.junit.jupiter.api.Test
     void figuresAreTheSameDrawingsAsPng() throws Exception {
-        Path dir = Files.createTempDirectory("plumbline");
+        Path dir = tempDir;
         CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--claims", "samples/portal-frame-claims.yaml",
                 "--figures", dir.toString());
         assertEquals(1, r.code(), r.err());

@@ -14,6 +14,10 @@ import plumbline.io.OutputFiles;
 /** Every bundled sample runs through check; the planted slip is the only mismatch. */
 class SamplesTest {
 
+    /** A fresh folder per test, removed afterwards. */
+    @org.junit.jupiter.api.io.TempDir
+    Path tempDir;
+
     @ParameterizedTest(name = "{0}")
     @CsvSource({
             "footbridge-truss.yaml, footbridge-truss-claims.yaml, M-D1-ULS-N_max",
@@ -24,7 +28,7 @@ class SamplesTest {
     })
     @SuppressWarnings("unchecked")
     void sampleRuns(String model, String claims, String slip) throws Exception {
-        Path json = Files.createTempDirectory("plumbline").resolve("r.json");
+        Path json = tempDir.resolve("r.json");
         CliRunner r = CliRunner.run("check", "samples/" + model, "--claims", "samples/" + claims, "--json", json.toString());
         assertEquals(1, r.code(), r.err() + r.out());
         for (String line : r.out().split("\n")) assertTrue(line.length() <= 80, "80 columns: " + line);
@@ -42,7 +46,7 @@ class SamplesTest {
         assertEquals(0, t.code(), t.err());
         // fill one value in: the vertical reaction at A under G (16.0 kN by symmetry of the roof load, statics by hand)
         String filled = t.out().replaceFirst("\\{node: A, combo: G, Fx: ~, Fy: ~", "{node: A, combo: G, Fx: ~, Fy: 16.0");
-        Path f = Files.createTempDirectory("plumbline").resolve("claims.yaml");
+        Path f = tempDir.resolve("claims.yaml");
         Files.writeString(f, filled);
         CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--claims", f.toString());
         assertEquals(0, r.code(), r.err() + r.out());
@@ -51,7 +55,7 @@ class SamplesTest {
 
     @org.junit.jupiter.api.Test
     void aCheckWithNoClaimsSaysSoAndIsNeverOk() throws Exception {
-        Path dir = Files.createTempDirectory("plumbline");
+        Path dir = tempDir;
         CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--json", dir.resolve("r.json").toString(),
                 "--pdf", dir.resolve("r.pdf").toString());
         assertEquals(0, r.code(), "format reference (src/site/markdown/formats.md) section 6: no claims exits 0\n" + r.err() + r.out());

@@ -13,9 +13,13 @@ import plumbline.cli.CliRunnerAccess;
 /** A model and claims written as JSON read exactly as their YAML, and JSON problems carry line and column. */
 class JsonInputTest {
 
+    /** A fresh folder per test, removed afterwards. */
+    @org.junit.jupiter.api.io.TempDir
+    Path tempDir;
+
     @Test
     void jsonModelAndClaimsGiveTheSameCheck() throws Exception {
-        Path dir = Files.createTempDirectory("plumbline");
+        Path dir = tempDir;
         Object model = new YAMLMapper().readValue(Path.of("samples/portal-frame.yaml").toFile(), Object.class);
         Object claims = new YAMLMapper().readValue(Path.of("samples/portal-frame-claims.yaml").toFile(), Object.class);
         Path m = dir.resolve("portal.json"), c = dir.resolve("claims.json");
@@ -29,7 +33,7 @@ class JsonInputTest {
 
     @Test
     void jsonProblemsNameLineAndColumn() throws Exception {
-        Path dir = Files.createTempDirectory("plumbline");
+        Path dir = tempDir;
         Path m = dir.resolve("bad.json");
         Files.writeString(m, "{\n  \"format\": \"plumbline/1\",\n  \"units\": {\"force\": \"kN\", \"length\": \"m\"},\n"
                 + "  \"nodes\": {\"A\": [0, 0], \"B\": [6, 0]},\n  \"members\": {\"M1\": {\"from\": \"A\", \"to\": \"B\", \"sectoin\": \"G\"}}\n}\n");
