@@ -67,7 +67,10 @@ public final class ForceEngine implements Engine {
 
     /** Why the model is too large for this engine, or null when it is not. */
     public static String tooLarge(Model model) {
-        int m = equations(model);
+        return tooLarge(equations(model));
+    }
+
+    static String tooLarge(int m) {
         return m > MAX_EQUATIONS ? "the model has " + m + " node equations; the force method takes at most " + MAX_EQUATIONS : null;
     }
 
