@@ -14,7 +14,9 @@ import plumbline.solve.stiffness.StiffnessEngine;
 import plumbline.statics.Determinacy;
 
 /**
- * Property test over seeded random stable frames and trusses: the stiffness and force
+ * Property test over seeded random stable frames, trusses and pitched frames (inclined
+ * members, loads of every kind and direction, loads and settlements at inclined and sprung
+ * supports): the stiffness and force
  * engines, which share no solving code, agree to 1e-8 relative on reactions, end forces,
  * peaks and displacements, and each solution's equilibrium residual is below 1e-9.
  */
@@ -28,7 +30,8 @@ class EnginesAgreeTest {
         int solved = 0, tried = 0;
         while (solved < MODELS) {
             tried++;
-            String yaml = rnd.nextBoolean() ? frame(rnd) : truss(rnd);
+            int kind = rnd.nextInt(3);
+            String yaml = kind == 0 ? frame(rnd) : kind == 1 ? truss(rnd) : pitched(rnd);
             Model m = Models.yaml(yaml);
             if (Determinacy.of(m).classification() == Determinacy.Classification.UNSTABLE) continue;
             EngineResult s = new StiffnessEngine().solve(m), f = new ForceEngine().solve(m);
@@ -122,5 +125,55 @@ class EnginesAgreeTest {
         loads.append("      - {node: U1, Fx: ").append(f(10 * rnd.nextDouble())).append("}\n");
         loads.append("  S:\n    type: settlement\n    settlements:\n      - {node: L0, uy: -5 mm}\n");
         return head() + n + sup + mem + loads;
+    }
+
+    /**
+     * A pitched portal with a random apex offset: inclined rafters, an inclined or sprung
+     * support, node loads and couples at supported and free nodes, loads in every direction
+     * and per plan, partial trapezoids, point loads and couples on members, hinges at either
+     * end, settlements that translate and rotate, and a thermal gradient on a sloping member.
+     */
+    static String pitched(Random rnd) {
+        double span = 6 + 6 * rnd.nextDouble(), eaves = 3 + 2 * rnd.nextDouble(), rise = 0.5 + 2.5 * rnd.nextDouble();
+        double apex = span * (0.3 + 0.4 * rnd.nextDouble());
+        String[] left = {"fixed", "pinned", "{fix: [ux, uy], springs: {rz: 2.0e4}}", "{fix: [ux, uy, rz], angle: 15 deg}"};
+        String[] right = {"fixed", "pinned", "{fix: [uy], angle: " + f(10 + 30 * rnd.nextDouble()) + " deg}",
+                "{fix: [uy], springs: {ux: 8.0e3}}", "{fix: [ux, uy, rz], angle: -20 deg}"};
+        String[] dirs = {"y", "x", "local-y", "local-x", "gravity"};
+        String hingeR1 = rnd.nextInt(4) == 0 ? ", hinge: start" : "", hingeR2 = rnd.nextInt(4) == 0 ? ", hinge: end" : "";
+        StringBuilder y = new StringBuilder(head());
+        y.append("nodes: {A: [0, 0], B: [0, ").append(f(eaves)).append("], C: [").append(f(apex)).append(", ").append(f(eaves + rise))
+                .append("], D: [").append(f(span)).append(", ").append(f(eaves)).append("], E: [").append(f(span)).append(", 0]}\n");
+        int e = rnd.nextInt(right.length);
+        y.append("supports: {A: ").append(left[rnd.nextInt(left.length)]).append(", E: ").append(right[e]).append("}\n");
+        y.append("members:\n  C1: {from: A, to: B, section: A}\n  R1: {from: B, to: C, section: B").append(hingeR1)
+                .append("}\n  R2: {from: D, to: C, section: B").append(hingeR2).append("}\n  C2: {from: E, to: D, section: A}\n");
+        y.append("loads:\n  G:\n    type: dead\n    self_weight: true\n    member_loads:\n");
+        for (String m : new String[]{"R1", "R2", "C1", "C2"}) {
+            String dir = dirs[rnd.nextInt(dirs.length)];
+            boolean plan = dir.equals("gravity") || dir.equals("y") ? rnd.nextBoolean() : false;
+            y.append("      - {member: ").append(m).append(", w: [").append(f(-1 - 4 * rnd.nextDouble())).append(", ").append(f(-1 - 4 * rnd.nextDouble()))
+                    .append("], from: '").append(f(40 * rnd.nextDouble())).append("%', to: '").append(f(60 + 40 * rnd.nextDouble()))
+                    .append("%', dir: ").append(dir).append(plan ? ", per: plan" : "").append("}\n");
+            y.append("      - {member: ").append(m).append(", P: ").append(f(-10 * rnd.nextDouble())).append(", at: '").append(f(100 * rnd.nextDouble()))
+                    .append("%', dir: ").append(dirs[rnd.nextInt(dirs.length)]).append("}\n");
+            if (rnd.nextBoolean()) y.append("      - {member: ").append(m).append(", M: ").append(f(8 * rnd.nextDouble() - 4)).append(", at: '")
+                    .append(f(100 * rnd.nextDouble())).append("%'}\n");
+        }
+        y.append("    node_loads:\n");
+        for (String n : new String[]{"A", "B", "C", "D", "E"}) {
+            if (rnd.nextBoolean()) y.append("      - {node: ").append(n).append(", Fx: ").append(f(10 * rnd.nextDouble() - 5)).append(", Fy: ")
+                    .append(f(-10 * rnd.nextDouble())).append(", Mz: ").append(f(6 * rnd.nextDouble() - 3)).append("}\n");
+        }
+        y.append("      - {node: D, Fx: -2.5}\n");
+        y.append("  T:\n    type: thermal\n    temperatures:\n      - {member: R").append(1 + rnd.nextInt(2))
+                .append(", uniform: ").append(f(30 * rnd.nextDouble() - 10)).append(" degC, gradient: ").append(f(20 * rnd.nextDouble() - 10)).append(" degC}\n");
+        // settle E in the directions it restrains: all three when fixed, ux and uy when pinned, uy otherwise
+        y.append("  S:\n    type: settlement\n    settlements:\n      - {node: E, uy: ").append(f(-8 * rnd.nextDouble())).append(" mm");
+        if (e == 0 || e == 1 || e == 4) y.append(", ux: ").append(f(4 * rnd.nextDouble() - 2)).append(" mm");
+        if (e == 0 || e == 4) y.append(", rz: ").append(f(0.004 * rnd.nextDouble() - 0.002)).append(" rad");
+        y.append("}\n");
+        y.append("      - {node: A, uy: ").append(f(-5 * rnd.nextDouble())).append(" mm}\n");
+        return y.toString();
     }
 }
