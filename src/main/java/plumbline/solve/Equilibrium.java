@@ -11,8 +11,9 @@ import plumbline.statics.AppliedLoads;
 
 /**
  * The equilibrium check run on every solution, whichever engine made it: each member must
- * balance its end forces against its loads, and each node its applied loads, its reaction
- * and the forces of the members framing into it. The residual is the largest imbalance
+ * balance its end forces against its loads, the loads its member functions carry must have
+ * the resultant of the model's loads on it, and each node must balance its applied loads,
+ * its reaction and the forces of the members framing into it. The residual is the largest imbalance
  * relative to the largest force (moments divided by the model's extent) in play.
  */
 public final class Equilibrium {
@@ -80,6 +81,11 @@ public final class Equilibrium {
             double rx = gi[0] + gj[0] + load[0], ry = gi[1] + gj[1] + load[1];
             double rm = gi[2] + gj[2] + dx * gj[1] - dy * gj[0] + load[2];
             worst = Math.max(worst, Math.max(Math.hypot(rx, ry), Math.abs(rm) / lc));
+            // the loads the member functions carry (the description the peaks are drawn from) must be
+            // the model's own loads: their resultant, local {fx, fy, m about the start} turned to global
+            double[] carried = e.getValue().actions().resultantAboutStart();
+            double cgx = carried[0] * cx - carried[1] * cy, cgy = carried[0] * cy + carried[1] * cx;
+            worst = Math.max(worst, Math.max(Math.hypot(cgx - load[0], cgy - load[1]), Math.abs(carried[2] - load[2]) / lc));
             scale = Math.max(scale, Math.max(magnitude(gi, lc), magnitude(gj, lc)));
             scale = Math.max(scale, magnitude(load, lc));
             // the member pushes on its nodes with the opposite of the forces on its ends

@@ -124,16 +124,28 @@ class SafeguardTest {
 
     @Test
     void slipInOneEnginesMemberFunctionsMakesThemDisagree() {
-        // the stiffness method's member functions see every point load 5% further along the member:
-        // end forces and equilibrium stay right, the peaks do not
-        MemberFunctions shifted = (f, a, ei, vs, ve) -> MemberFunctions.SHARED.solve(f, new MemberActions(a.lengthM(),
-                a.distributed(), a.points().stream().map(p -> new MemberActions.Point(Math.min(a.lengthM(), p.aM() * 1.05), p.px(),
-                p.qy())).toList(), a.couples(), a.thermalStrain(), a.thermalCurvaturePerM()), ei, vs, ve);
-        Review r = review(new StiffnessEngine(MemberLoading.SHARED, shifted), new ForceEngine());
+        // the stiffness method's member functions take EI 5% too stiff: end forces, loads and equilibrium
+        // stay right, the deflections along the members do not
+        MemberFunctions stiff = (f, a, ei, vs, ve) -> MemberFunctions.SHARED.solve(f, a, ei * 1.05, vs, ve);
+        Review r = review(new StiffnessEngine(MemberLoading.SHARED, stiff), new ForceEngine());
         assertTrue(r.safeguards().balanced(), "residual " + r.safeguards().worstResidual());
         assertFalse(r.safeguards().enginesAgree());
         assertEquals(Verdict.ENGINES_DISAGREE, r.verdict());
         assertTrue(r.verdict().flagged);
+    }
+
+    @Test
+    void loadsMovedInsideOneEnginesMemberFunctionsAreSeenByBothSafeguards() {
+        // the stiffness method's member functions see every point load 5% further along the member: the
+        // peaks differ from the force method's, and the loads the functions carry no longer have the
+        // moment of the model's loads about the member's start
+        MemberFunctions shifted = (f, a, ei, vs, ve) -> MemberFunctions.SHARED.solve(f, new MemberActions(a.lengthM(),
+                a.distributed(), a.points().stream().map(p -> new MemberActions.Point(Math.min(a.lengthM(), p.aM() * 1.05), p.px(),
+                p.qy())).toList(), a.couples(), a.thermalStrain(), a.thermalCurvaturePerM()), ei, vs, ve);
+        Review r = review(new StiffnessEngine(MemberLoading.SHARED, shifted), new ForceEngine());
+        assertFalse(r.safeguards().enginesAgree());
+        assertFalse(r.safeguards().balanced(), "residual " + r.safeguards().worstResidual());
+        assertEquals(Verdict.ENGINES_DISAGREE, r.verdict(), "a disagreement of the engines ranks above an imbalance");
     }
 
     @Test
