@@ -1,0 +1,122 @@
+package plumbline.solve;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The exact member-function arithmetic, against algebra by hand: polynomial products,
+ * Taylor shifts, roots (simple, double, at the ends of the interval), one-sided values at
+ * jumps, the extremes and where they occur, and the pattern envelope of parts switched on
+ * where they add.
+ */
+class PolyAndPiecewiseTest {
+
+    @Test
+    void polynomialAlgebra() {
+        Poly p = new Poly(1, 2, 3); // 1 + 2t + 3t^2
+        assertEquals("[1.0, 2.0, 3.0]", p.toString());
+        assertEquals(2, p.degree());
+        assertEquals(1 + 2 * 2 + 3 * 4, p.at(2), 0);
+        assertEquals(0, p.coefficient(7), 0);
+        // trailing zeros are not a degree
+        assertEquals(1, new Poly(1, 2, 0, 0).degree());
+        assertEquals(0, p.times(0).degree());
+        assertEquals("[2.0, 4.0, 6.0]", p.times(2).toString());
+        assertEquals("[1.0, 0.0, -1.0]", new Poly(1, 1).times(new Poly(1, -1)).toString(), "(1 + t)(1 - t)");
+        assertEquals("[2.0, 6.0]", p.derivative().toString());
+        assertEquals(Poly.ZERO.toString(), new Poly(5).derivative().toString());
+        assertEquals("[5.0, 2.0, 3.0]", new Poly(2, 6).integral(5).toString());
+        assertEquals(8, new Poly(0, 0, 3).integrate(2), 1e-15, "integral of 3t^2 over [0, 2]");
+        // p(s + 1) = 1 + 2(s + 1) + 3(s + 1)^2 = 6 + 8s + 3s^2
+        assertEquals("[6.0, 8.0, 3.0]", p.shifted(1).toString());
+        assertEquals("[2.0, -4.0, 3.0]", p.shifted(-1).toString());
+        assertEquals("[4.0, 3.0, 5.0]", new Poly(1, 2, 3).plus(new Poly(3, 1, 2)).toString());
+    }
+
+    @Test
+    void rootsInTheOpenInterval() {
+        assertArrayEquals(new double[]{0.5}, new Poly(-1, 2).rootsIn(1), 0);
+        assertArrayEquals(new double[0], new Poly(-1, 2).rootsIn(0.5), "a root at the end is outside the open interval");
+        assertArrayEquals(new double[0], new Poly(0, 2).rootsIn(1), "a root at the start is outside");
+        assertArrayEquals(new double[0], new Poly(3).rootsIn(1));
+        // (t - 1)^2: a double root, where the derivative's root is
+        assertArrayEquals(new double[]{1}, new Poly(1, -2, 1).rootsIn(3), 0);
+        // (t - 1)(t - 2)(t - 3) = -6 + 11t - 6t^2 + t^3
+        Poly cubic = new Poly(-6, 11, -6, 1);
+        assertArrayEquals(new double[]{1, 2, 3}, cubic.rootsIn(4), 1e-14);
+        assertArrayEquals(new double[]{1, 2}, cubic.rootsIn(3), 1e-14);
+        assertArrayEquals(new double[]{1, 2}, cubic.rootsIn(2.5), 1e-14);
+        // t^3 - t: roots -1, 0, 1; only 1 inside (0, 2)
+        assertArrayEquals(new double[]{1}, new Poly(0, -1, 0, 1).rootsIn(2), 1e-14);
+        // x^2 - 2 = 0 at sqrt 2, bisected to the last bit
+        assertArrayEquals(new double[]{Math.sqrt(2)}, new Poly(-2, 0, 1).rootsIn(2), 4e-16);
+        // a root the bisection lands on exactly (0.75 = 3/4) and one near the end (1.9)
+        assertArrayEquals(new double[]{0.75}, new Poly(-0.75, 1, 0).times(new Poly(-1.9, 1)).rootsIn(1.9), 1e-15);
+        assertArrayEquals(new double[]{0.75, 1.9}, new Poly(-0.75, 1).times(new Poly(-1.9, 1)).rootsIn(2), 1e-15);
+    }
+
+    /** 1 + t on [0, 2] (1 to 3), then 10 - t on [2, 4] (10 to 8): a jump of 7 at x = 2. */
+    static Piecewise jump() {
+        return new Piecewise(new double[]{0, 2, 4}, new Poly[]{new Poly(1, 1), new Poly(10, -1)});
+    }
+
+    @Test
+    void valuesAreOneSidedAtAJump() {
+        Piecewise f = jump();
+        assertEquals(1, f.at(0), 0);
+        assertEquals(2, f.at(1), 0);
+        assertEquals(10, f.at(2), 0, "from the right at the breakpoint");
+        assertEquals(3, f.atLeft(2), 0, "from the left at the breakpoint");
+        assertEquals(9, f.at(3), 0);
+        assertEquals(8, f.at(4), 0);
+        assertEquals(8, f.atLeft(4), 0);
+        assertEquals(1, f.atLeft(0), 0);
+        assertEquals(2.5, f.atLeft(1.5), 0);
+        assertEquals(2, f.segments());
+        assertEquals(2, f.start(1), 0);
+        assertEquals(4, f.end(1), 0);
+        assertArrayEquals(new double[]{0, 2, 4}, f.breakpoints(), 0);
+    }
+
+    @Test
+    void extremesAndWhereTheyOccur() {
+        Piecewise f = jump();
+        assertEquals(new Piecewise.Extreme(10, 2), f.max());
+        assertEquals(new Piecewise.Extreme(1, 0), f.min());
+        // 4t - t^2 on [0, 4]: top 4 at 2; the least 0 at both ends, reported at the first
+        Piecewise arch = new Piecewise(new double[]{0, 4}, new Poly[]{new Poly(0, 4, -1)});
+        assertEquals(new Piecewise.Extreme(4, 2), arch.max());
+        assertEquals(new Piecewise.Extreme(0, 0), arch.min());
+        // a piece in its own coordinate: t^2 - 2t on [3, 6] is x^2 - 8x + 15 with x = t + 3: least -1 at x = 4
+        Piecewise shifted = new Piecewise(new double[]{0, 3, 6}, new Poly[]{new Poly(5), new Poly(0, -2, 1)});
+        assertEquals(new Piecewise.Extreme(-1, 4), shifted.min());
+        assertEquals(new Piecewise.Extreme(5, 0), shifted.max());
+    }
+
+    @Test
+    void thePatternEnvelopeSwitchesOnTheArrangementsThatAdd() {
+        // base 1; part A = 4x - x^2 (never negative on [0, 4]); part B = x - 2 (negative left of 2, positive right).
+        // Largest: base + A + B on [2, 4] = -1 + 5x - x^2, top at x = 2.5: -1 + 12.5 - 6.25 = 5.25, both parts on.
+        // Least: base + B on [0, 2] (A off), at x = 0: 1 - 2 = -1, B alone on.
+        Piecewise base = new Piecewise(new double[]{0, 4}, new Poly[]{new Poly(1)});
+        Piecewise a = new Piecewise(new double[]{0, 4}, new Poly[]{new Poly(0, 4, -1)});
+        Piecewise b = new Piecewise(new double[]{0, 1, 4}, new Poly[]{new Poly(-2, 1), new Poly(-1, 1)});
+        Envelope.Extreme max = Envelope.max(base, List.of(a, b));
+        assertEquals(5.25, max.value(), 1e-14);
+        assertEquals(2.5, max.xM(), 1e-14);
+        assertEquals(List.of(0, 1), max.partsOn());
+        Envelope.Extreme min = Envelope.min(base, List.of(a, b));
+        assertEquals(-1, min.value(), 1e-14);
+        assertEquals(0, min.xM(), 0);
+        assertEquals(List.of(1), min.partsOn());
+        // with no parts the envelope is the base function itself
+        Envelope.Extreme alone = Envelope.max(jump(), List.of());
+        assertEquals(10, alone.value(), 0);
+        assertEquals(2, alone.xM(), 0);
+        assertEquals(List.of(), alone.partsOn());
+        assertEquals(1, Envelope.min(jump(), List.of()).value(), 0);
+    }
+}
