@@ -7,7 +7,6 @@ import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
 import plumbline.linalg.SkylineLdl;
-import plumbline.linalg.SkylineMatrix;
 import plumbline.model.Member;
 import plumbline.model.Model;
 import plumbline.model.Node;
@@ -77,63 +76,18 @@ public final class Determinacy {
         return eq.equations().size() > DENSE_LIMIT ? sparse(model, eq) : dense(model, eq);
     }
 
-    /** The entry of A scaled so moment rows and columns are forces (entries of order one). */
-    private static double scaleFactor(EquilibriumMatrix eq, int row, int col) {
-        double lc = eq.lengthScale();
-        double rowScale = eq.equations().get(row).direction() == 2 ? 1 / lc : 1;
-        EquilibriumMatrix.Unknown u = eq.unknowns().get(col);
-        boolean momentColumn = u.kind() == EquilibriumMatrix.Kind.MOMENT_START || u.kind() == EquilibriumMatrix.Kind.MOMENT_END
-                || (u.kind() == EquilibriumMatrix.Kind.REACTION && u.direction() == 2);
-        return rowScale * (momentColumn ? lc : 1);
-    }
-
     static Result sparse(Model model, EquilibriumMatrix eq) {
         int m = eq.equations().size(), n = eq.unknowns().size();
         double lc = eq.lengthScale();
-        // order the equations node by node in reverse Cuthill-McKee order of the node graph
-        List<String> nodeNames = new ArrayList<>(model.nodes().keySet());
-        java.util.Map<String, Integer> nodeIndex = new java.util.HashMap<>();
-        for (int k = 0; k < nodeNames.size(); k++) nodeIndex.put(nodeNames.get(k), k);
-        List<int[]> edges = new ArrayList<>();
-        for (Member mem : model.members().values()) edges.add(new int[]{nodeIndex.get(mem.from()), nodeIndex.get(mem.to())});
-        int[] order = plumbline.linalg.NodeOrdering.reverseCuthillMcKee(nodeNames.size(), edges);
-        int[] rank = new int[nodeNames.size()];
-        for (int k = 0; k < order.length; k++) rank[order[k]] = k;
-        Integer[] eqOrder = new Integer[m];
-        for (int i = 0; i < m; i++) eqOrder[i] = i;
-        java.util.Arrays.sort(eqOrder, (p, q) -> {
-            int a = rank[nodeIndex.get(eq.equations().get(p).node())], b = rank[nodeIndex.get(eq.equations().get(q).node())];
-            return a != b ? Integer.compare(a, b) : Integer.compare(p, q);
-        });
-        int[] pos = new int[m];
-        for (int k = 0; k < m; k++) pos[eqOrder[k]] = k;
-        int[] first = new int[m];
-        for (int i = 0; i < m; i++) first[i] = i;
-        for (int j = 0; j < n; j++) {
-            int[] r = eq.columnRows(j);
-            int min = Integer.MAX_VALUE;
-            for (int i : r) min = Math.min(min, pos[i]);
-            for (int i : r) first[pos[i]] = Math.min(first[pos[i]], min);
-        }
-        SkylineMatrix k = new SkylineMatrix(first);
-        for (int j = 0; j < n; j++) {
-            int[] r = eq.columnRows(j);
-            double[] v = eq.columnValues(j);
-            for (int p = 0; p < r.length; p++) {
-                for (int q = 0; q < r.length; q++) {
-                    if (pos[r[p]] > pos[r[q]]) continue;
-                    k.add(pos[r[p]], pos[r[q]], v[p] * scaleFactor(eq, r[p], j) * v[q] * scaleFactor(eq, r[q], j));
-                }
-            }
-        }
-        SkylineLdl ldl = k.factorSemidefinite(SPARSE_PIVOT_TOLERANCE);
+        ScaledEquilibrium scaled = ScaledEquilibrium.of(model, eq);
+        SkylineLdl ldl = scaled.normalMatrix().factorSemidefinite(SPARSE_PIVOT_TOLERANCE);
         int[] zeros = ldl.zeroPivots();
         List<Mechanism> shapes = new ArrayList<>();
         List<double[]> basis = new ArrayList<>();
         for (int z : zeros) {
             double[] x = ldl.nullVector(z);
             double[] vec = new double[m];
-            for (int i = 0; i < m; i++) vec[i] = x[pos[i]];
+            for (int i = 0; i < m; i++) vec[i] = x[scaled.position(i)];
             basis.add(vec);
         }
         if (basis.size() <= 50) basis = separated(basis);
@@ -144,13 +98,14 @@ public final class Determinacy {
 
     static Result dense(Model model, EquilibriumMatrix eq) {
         int m = eq.equations().size(), n = eq.unknowns().size();
+        ScaledEquilibrium scaled = ScaledEquilibrium.of(model, eq);
         double lc = eq.lengthScale();
         int size = Math.max(m, n);
         double[][] s = new double[m][size];
         for (int j = 0; j < n; j++) {
-            int[] r = eq.columnRows(j);
-            double[] v = eq.columnValues(j);
-            for (int p = 0; p < r.length; p++) s[r[p]][j] = v[p] * scaleFactor(eq, r[p], j);
+            int[] r = scaled.columnRows(j);
+            double[] v = scaled.columnValues(j);
+            for (int p = 0; p < r.length; p++) s[r[p]][j] = v[p];
         }
         int rank;
         List<Mechanism> shapes = new ArrayList<>();

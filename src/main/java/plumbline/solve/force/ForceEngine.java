@@ -28,6 +28,7 @@ import plumbline.solve.Peaks;
 import plumbline.solve.MemberSolution;
 import plumbline.solve.Solution;
 import plumbline.statics.EquilibriumMatrix;
+import plumbline.statics.ScaledEquilibrium;
 
 /**
  * The force (flexibility) method. Unknowns are the independent forces of the equilibrium
@@ -129,7 +130,6 @@ public final class ForceEngine implements Engine {
             if (!sparse.declined() || eq.equations().size() > DENSE_FALLBACK_LIMIT) return sparse;
         }
         int m = eq.equations().size(), n = eq.unknowns().size();
-        double lc = eq.lengthScale();
         List<EquilibriumMatrix.Unknown> unk = eq.unknowns();
         // choose the basis: axial forces first, then end moments, then reactions; user redundants never
         List<Integer> order = new ArrayList<>();
@@ -145,14 +145,13 @@ public final class ForceEngine implements Engine {
                         + String.join(", ", unk.stream().map(EquilibriumMatrix.Unknown::label).toList()));
             }
         }
+        // entries scaled to ratios of forces (ScaledEquilibrium), so the pivot test is scale-free
         double[][] scaled = new double[m][n];
-        for (int i = 0; i < m; i++) {
-            for (int j = 0; j < n; j++) {
-                double v = eq.get(i, j);
-                if (eq.equations().get(i).direction() == 2) v /= lc;
-                if (isMoment(unk.get(j))) v *= lc;
-                scaled[i][j] = v;
-            }
+        ScaledEquilibrium as = ScaledEquilibrium.of(model, eq);
+        for (int j = 0; j < n; j++) {
+            int[] rows = as.columnRows(j);
+            double[] vals = as.columnValues(j);
+            for (int k = 0; k < rows.length; k++) scaled[rows[k]][j] = vals[k];
         }
         // Gauss-Jordan selection of the basis, column by column in order of preference: the basis
         // vectors are kept in reduced row-echelon form (each zero at the others' pivot rows), so a
@@ -287,11 +286,6 @@ public final class ForceEngine implements Engine {
         ForceWorking record = new ForceWorking(redundant.stream().map(j -> unk.get(j).label()).toList(),
                 r > 0 && r <= WORKING_SHOWN ? delta.getData() : new double[0][], deltaZeros, redundantValues);
         return new EngineResult(name(), true, null, cases, notes, false, record);
-    }
-
-    private static boolean isMoment(EquilibriumMatrix.Unknown u) {
-        return u.kind() == EquilibriumMatrix.Kind.MOMENT_START || u.kind() == EquilibriumMatrix.Kind.MOMENT_END
-                || (u.kind() == EquilibriumMatrix.Kind.REACTION && u.direction() == 2);
     }
 
     /**

@@ -13,14 +13,12 @@ import plumbline.linalg.NodeOrdering;
 import plumbline.linalg.SkylineLdl;
 import plumbline.linalg.SkylineMatrix;
 import plumbline.model.LoadCase;
-import plumbline.model.Member;
 import plumbline.model.Model;
-import plumbline.model.Node;
-import plumbline.model.Support;
 import plumbline.solve.EngineResult;
 import plumbline.solve.MemberActions;
 import plumbline.solve.Solution;
 import plumbline.statics.EquilibriumMatrix;
+import plumbline.statics.ScaledEquilibrium;
 
 /**
  * The force method for large models, kept sparse by choosing local self-stress states: the
@@ -48,12 +46,9 @@ final class SparseForceMethod {
     private final Model model;
     private final EquilibriumMatrix eq;
     private final int m, n;
-    private final double[] rowScale, colScale;
-    private final int[][] colRows;
-    private final double[][] colVals;   // scaled A_s = R A C by columns
-    private final int[] pos;            // equation -> position in the normal-equation ordering
+    private final ScaledEquilibrium scaled; // A_s = R A C, its equations in banded order
     private final ForceEngine method;     // the member loads and member functions to use
-    private SkylineLdl normal;
+    private final SkylineLdl normal;     // the factored normal equations A_s A_s^T
 
     private SparseForceMethod(Model model, EquilibriumMatrix eq, ForceEngine method) {
         this.model = model;
@@ -61,23 +56,13 @@ final class SparseForceMethod {
         this.eq = eq;
         m = eq.equations().size();
         n = eq.unknowns().size();
-        double lc = eq.lengthScale();
-        rowScale = new double[m];
-        for (int i = 0; i < m; i++) rowScale[i] = eq.equations().get(i).direction() == 2 ? 1 / lc : 1;
-        colScale = new double[n];
-        colRows = new int[n][];
-        colVals = new double[n][];
+        scaled = ScaledEquilibrium.of(model, eq);
         for (int j = 0; j < n; j++) {
             EquilibriumMatrix.Unknown u = eq.unknowns().get(j);
-            boolean moment = u.kind() == EquilibriumMatrix.Kind.MOMENT_START || u.kind() == EquilibriumMatrix.Kind.MOMENT_END
-                    || (u.kind() == EquilibriumMatrix.Kind.REACTION && u.direction() == 2);
-            colScale[j] = moment ? lc : 1;
-            colRows[j] = eq.columnRows(j);
-            double[] v = eq.columnValues(j);
-            for (int k = 0; k < v.length; k++) v[k] *= rowScale[colRows[j][k]] * colScale[j];
-            colVals[j] = v;
+            (u.kind() == EquilibriumMatrix.Kind.REACTION ? unknownsOfSupport : unknownsOfMember)
+                    .computeIfAbsent(u.owner(), k -> new ArrayList<>()).add(j);
         }
-        pos = equationOrder();
+        normal = scaled.normalMatrix().factor();
     }
 
     /** Solves the model, or returns a result whose instability says why this method declined. */
@@ -86,61 +71,103 @@ final class SparseForceMethod {
         return s.run(method.name());
     }
 
-    private int[] equationOrder() {
-        List<String> names = new ArrayList<>(model.nodes().keySet());
-        Map<String, Integer> index = new HashMap<>();
-        for (int k = 0; k < names.size(); k++) index.put(names.get(k), k);
-        List<int[]> edges = new ArrayList<>();
-        for (Member mem : model.members().values()) edges.add(new int[]{index.get(mem.from()), index.get(mem.to())});
-        int[] order = NodeOrdering.reverseCuthillMcKee(names.size(), edges);
-        int[] rank = new int[names.size()];
-        for (int k = 0; k < order.length; k++) rank[order[k]] = k;
-        Integer[] eqs = new Integer[m];
-        for (int i = 0; i < m; i++) eqs[i] = i;
-        Arrays.sort(eqs, (p, q) -> {
-            int a = rank[index.get(eq.equations().get(p).node())], b = rank[index.get(eq.equations().get(q).node())];
-            return a != b ? Integer.compare(a, b) : Integer.compare(p, q);
-        });
-        int[] out = new int[m];
-        for (int k = 0; k < m; k++) out[eqs[k]] = k;
-        return out;
-    }
-
     private EngineResult run(String engine) {
-        // normal equations A_s A_s^T (positive definite for a stable model)
-        int[] first = new int[m];
-        for (int i = 0; i < m; i++) first[i] = i;
-        for (int j = 0; j < n; j++) {
-            int min = Integer.MAX_VALUE;
-            for (int i : colRows[j]) min = Math.min(min, pos[i]);
-            for (int i : colRows[j]) first[pos[i]] = Math.min(first[pos[i]], min);
-        }
-        SkylineMatrix normalMatrix = new SkylineMatrix(first);
-        for (int j = 0; j < n; j++) {
-            for (int p = 0; p < colRows[j].length; p++) {
-                for (int q = 0; q < colRows[j].length; q++) {
-                    int a = pos[colRows[j][p]], b = pos[colRows[j][q]];
-                    if (a <= b) normalMatrix.add(a, b, colVals[j][p] * colVals[j][q]);
-                }
-            }
-        }
-        normal = normalMatrix.factor();
         if (!normal.isNonSingular()) return EngineResult.unstable(engine, "the equilibrium equations are singular: no statically admissible state");
         // local self-stress states from the rings
-        List<int[]> faces = faces();
-        if (faces == null) {
+        PlaneDrawing drawing = PlaneDrawing.of(model);
+        if (!drawing.plane()) {
             return EngineResult.declined(engine, "the sparse force method needs a plane drawing without crossing members; "
                     + "this model has crossings, so its rings cannot be read from the drawing");
         }
-        // rings smallest first; the long ones (a chord between two supports) only while states are still missing
         int degree = n - m;
+        List<Map<Integer, Double>> states = selfStressStates(drawing, degree);
+        if (states.size() != degree) {
+            return EngineResult.declined(engine, "the rings of the drawing give " + states.size() + " self-stress states for a degree of "
+                    + degree + " (releases combine rings); the sparse force method declines this model");
+        }
+        Flexibility flex = Flexibility.of(model, eq);
+        int r = states.size();
+        // the states in reverse Cuthill-McKee order of their coupling: at[t] is state t's place
+        int[] at = stateOrder(states, flex);
+        SkylineLdl delta = compatibilityMatrix(states, flex, at).factor();
+        if (!delta.isNonSingular()) {
+            return EngineResult.declined(engine, "the ring self-stress states are not independent; the sparse force method declines this model");
+        }
+        Map<String, Integer> row = new HashMap<>();
+        for (int i = 0; i < m; i++) row.put(eq.equations().get(i).node() + "/" + eq.equations().get(i).direction(), i);
+        Map<String, Solution> cases = new LinkedHashMap<>();
+        Compatibility compat = new Compatibility(states, at, delta, flex);
+        for (LoadCase c : model.loadCases()) cases.put(c.name(), solveCase(c, row, compat));
+        List<String> notes = List.of("redundants: " + r + " self-stress states of the " + drawing.faces().size()
+                        + " closed rings (sparse force method; the working is not listed at this size)",
+                "flexibility matrix: " + r + " x " + r + ", " + delta.storedEntries() + " stored entries (skyline, RCM order)");
+        return new EngineResult(engine, true, null, cases, notes);
+    }
+
+    /**
+     * The self-stress states, each state's place in the factored compatibility matrix, that
+     * factorization, and the flexibility it was formed with: what every load case shares.
+     */
+    private record Compatibility(List<Map<Integer, Double>> states, int[] at, SkylineLdl delta, Flexibility flex) {
+    }
+
+    /**
+     * One load case: a particular equilibrium solution x0 (least norm), the redundants z
+     * from compatibility, x = x0 + X z, then the node displacements from the compatible
+     * deformations.
+     */
+    private Solution solveCase(LoadCase c, Map<String, Integer> row, Compatibility compat) {
+        int r = compat.states().size();
+        Map<String, MemberActions> actions = method.loading().of(model, c);
+        Map<String, double[]> particular = new HashMap<>();
+        double[] p = ForceEngine.nodeLoads(model, c, actions, row, m, particular);
+        double[] bs = new double[m];
+        for (int i = 0; i < m; i++) bs[i] = -p[i] * scaled.rowScale(i);
+        double[] xs = leastNorm(bs);
+        double[] x0 = new double[n];
+        for (int j = 0; j < n; j++) x0[j] = xs[j] * scaled.colScale(j);
+        double[] e0 = compat.flex().initialDeformation(model, eq, actions, particular);
+        double[] d = ForceEngine.settlements(model, eq, c);
+        double[] f0 = compat.flex().times(x0);
+        double[] gs = new double[n];
+        for (int j = 0; j < n; j++) gs[j] = (f0[j] + e0[j] - d[j]) * scaled.colScale(j);
+        double[] rhs = new double[r];
+        for (int t = 0; t < r; t++) {
+            double s = 0;
+            for (var en : compat.states().get(t).entrySet()) s += en.getValue() * gs[en.getKey()];
+            rhs[compat.at()[t]] = -s;
+        }
+        double[] z = compat.delta().solve(rhs);
+        double[] x = x0.clone();
+        for (int t = 0; t < r; t++) {
+            double zt = z[compat.at()[t]];
+            for (var en : compat.states().get(t).entrySet()) x[en.getKey()] += zt * en.getValue() * scaled.colScale(en.getKey());
+        }
+        double[] fx = compat.flex().times(x);
+        double[] ws = new double[n];
+        // virtual work with A x_v = -p_v: the node displacements satisfy A^T u = -(F x + e - d)
+        for (int j = 0; j < n; j++) ws[j] = -(fx[j] + e0[j] - d[j]) * scaled.colScale(j);
+        double[] us = compatibleDisplacements(ws);
+        double[] u = new double[m];
+        for (int i = 0; i < m; i++) u[i] = us[i] * scaled.rowScale(i);
+        return ForceEngine.assemble(model, eq, c, actions, particular, x, u, row, method.memberFunctions());
+    }
+
+    /**
+     * Independent self-stress states from the rings, smallest first (the long ones, a chord
+     * between two supports, only while states are still missing), then from pairs of
+     * neighbouring rings; stops at {@code degree} states.
+     */
+    private List<Map<Integer, Double>> selfStressStates(PlaneDrawing drawing, int degree) {
+        // rings smallest first; the long ones (a chord between two supports) only while states are still missing
+        List<int[]> faces = new ArrayList<>(drawing.faces());
         faces.sort(java.util.Comparator.comparingInt(f -> f.length));
         List<Map<Integer, Double>> states = new ArrayList<>();
         List<int[]> taken = new ArrayList<>();
         for (int[] face : faces) {
             if (states.size() >= degree) break;
             if (face.length > LONGEST_RING) break;
-            addStates(states, ringStates(face, states));
+            addStates(states, ringStates(drawing, face, states));
             taken.add(face);
         }
         // states that need two neighbouring rings together (a continuous beam on pinned supports,
@@ -156,19 +183,17 @@ final class SparseForceMethod {
                 int[] union = java.util.stream.IntStream.concat(Arrays.stream(taken.get(a)), Arrays.stream(taken.get(b)))
                         .distinct().toArray();
                 if (union.length > LONGEST_RING) continue;
-                addStates(states, ringStates(union, states));
+                addStates(states, ringStates(drawing, union, states));
             }
         }
-        if (states.size() != degree) {
-            return EngineResult.declined(engine, "the rings of the drawing give " + states.size() + " self-stress states for a degree of "
-                    + degree + " (releases combine rings); the sparse force method declines this model");
-        }
-        Flexibility flex = Flexibility.of(model, eq);
+        return states;
+    }
+
+    /** The flexibility blocks (keyed by a block's first unknown) each state touches. */
+    private Map<Integer, List<Integer>> touching(List<Map<Integer, Double>> states, Flexibility flex) {
         int r = states.size();
-        // compatibility matrix delta = X^T F_s X, assembled block by block, in reverse Cuthill-McKee order of the states
         Map<Integer, List<Integer>> statesAt = new HashMap<>();
         for (int t = 0; t < r; t++) for (int j : states.get(t).keySet()) statesAt.computeIfAbsent(j, k -> new ArrayList<>()).add(t);
-        List<int[]> pairs = new ArrayList<>();
         Map<Integer, List<Integer>> touching = new HashMap<>(); // flexibility block (first unknown) -> states
         for (int j = 0; j < n; j++) {
             int key = flex.group(j)[0];
@@ -177,10 +202,24 @@ final class SparseForceMethod {
             List<Integer> l = touching.computeIfAbsent(key, k -> new ArrayList<>());
             for (int t : st) if (!l.contains(t)) l.add(t);
         }
-        for (List<Integer> l : touching.values()) for (int a : l) for (int b : l) if (a < b) pairs.add(new int[]{a, b});
+        return touching;
+    }
+
+    /** Each state's place in the reverse Cuthill-McKee order of the states' coupling through shared flexibility blocks. */
+    private int[] stateOrder(List<Map<Integer, Double>> states, Flexibility flex) {
+        int r = states.size();
+        List<int[]> pairs = new ArrayList<>();
+        for (List<Integer> l : touching(states, flex).values()) for (int a : l) for (int b : l) if (a < b) pairs.add(new int[]{a, b});
         int[] order = NodeOrdering.reverseCuthillMcKee(r, pairs);
         int[] at = new int[r];
         for (int k = 0; k < r; k++) at[order[k]] = k;
+        return at;
+    }
+
+    /** The compatibility matrix delta = X^T F_s X, assembled block by block in the states' order. */
+    private SkylineMatrix compatibilityMatrix(List<Map<Integer, Double>> states, Flexibility flex, int[] at) {
+        int r = states.size();
+        Map<Integer, List<Integer>> touching = touching(states, flex);
         int[] dfirst = new int[r];
         for (int t = 0; t < r; t++) dfirst[t] = t;
         for (List<Integer> l : touching.values()) {
@@ -201,59 +240,14 @@ final class SparseForceMethod {
                         for (int q = 0; q < group.length; q++) {
                             double xb = states.get(b).getOrDefault(group[q], 0.0);
                             if (xb == 0) continue;
-                            v += xa * flex.coefficient(group[p], q) * colScale[group[p]] * colScale[group[q]] * xb;
+                            v += xa * flex.coefficient(group[p], q) * scaled.colScale(group[p]) * scaled.colScale(group[q]) * xb;
                         }
                     }
                     if (v != 0) deltaMatrix.add(at[a], at[b], v);
                 }
             }
         }
-        SkylineLdl delta = deltaMatrix.factor();
-        if (!delta.isNonSingular()) {
-            return EngineResult.declined(engine, "the ring self-stress states are not independent; the sparse force method declines this model");
-        }
-        Map<String, Integer> row = new HashMap<>();
-        for (int i = 0; i < m; i++) row.put(eq.equations().get(i).node() + "/" + eq.equations().get(i).direction(), i);
-        Map<String, Solution> cases = new LinkedHashMap<>();
-        for (LoadCase c : model.loadCases()) {
-            Map<String, MemberActions> actions = method.loading().of(model, c);
-            Map<String, double[]> particular = new HashMap<>();
-            double[] p = ForceEngine.nodeLoads(model, c, actions, row, m, particular);
-            double[] bs = new double[m];
-            for (int i = 0; i < m; i++) bs[i] = -p[i] * rowScale[i];
-            double[] xs = leastNorm(bs);
-            double[] x0 = new double[n];
-            for (int j = 0; j < n; j++) x0[j] = xs[j] * colScale[j];
-            double[] e0 = flex.initialDeformation(model, eq, actions, particular);
-            double[] d = ForceEngine.settlements(model, eq, c);
-            double[] f0 = flex.times(x0);
-            double[] gs = new double[n];
-            for (int j = 0; j < n; j++) gs[j] = (f0[j] + e0[j] - d[j]) * colScale[j];
-            double[] rhs = new double[r];
-            for (int t = 0; t < r; t++) {
-                double s = 0;
-                for (var en : states.get(t).entrySet()) s += en.getValue() * gs[en.getKey()];
-                rhs[at[t]] = -s;
-            }
-            double[] z = delta.solve(rhs);
-            double[] x = x0.clone();
-            for (int t = 0; t < r; t++) {
-                double zt = z[at[t]];
-                for (var en : states.get(t).entrySet()) x[en.getKey()] += zt * en.getValue() * colScale[en.getKey()];
-            }
-            double[] fx = flex.times(x);
-            double[] ws = new double[n];
-            // virtual work with A x_v = -p_v: the node displacements satisfy A^T u = -(F x + e - d)
-            for (int j = 0; j < n; j++) ws[j] = -(fx[j] + e0[j] - d[j]) * colScale[j];
-            double[] us = compatibleDisplacements(ws);
-            double[] u = new double[m];
-            for (int i = 0; i < m; i++) u[i] = us[i] * rowScale[i];
-            cases.put(c.name(), ForceEngine.assemble(model, eq, c, actions, particular, x, u, row, method.memberFunctions()));
-        }
-        List<String> notes = List.of("redundants: " + r + " self-stress states of the " + faces.size()
-                        + " closed rings (sparse force method; the working is not listed at this size)",
-                "flexibility matrix: " + r + " x " + r + ", " + delta.storedEntries() + " stored entries (skyline, RCM order)");
-        return new EngineResult(engine, true, null, cases, notes);
+        return deltaMatrix;
     }
 
     /** A_s x for unknowns x, by equation index. */
@@ -261,7 +255,9 @@ final class SparseForceMethod {
         double[] out = new double[m];
         for (int j = 0; j < n; j++) {
             if (x[j] == 0) continue;
-            for (int k = 0; k < colRows[j].length; k++) out[colRows[j][k]] += colVals[j][k] * x[j];
+            int[] rows = scaled.columnRows(j);
+            double[] vals = scaled.columnValues(j);
+            for (int k = 0; k < rows.length; k++) out[rows[k]] += vals[k] * x[j];
         }
         return out;
     }
@@ -270,7 +266,9 @@ final class SparseForceMethod {
         double[] out = new double[n];
         for (int j = 0; j < n; j++) {
             double s = 0;
-            for (int k = 0; k < colRows[j].length; k++) s += colVals[j][k] * y[colRows[j][k]];
+            int[] rows = scaled.columnRows(j);
+            double[] vals = scaled.columnValues(j);
+            for (int k = 0; k < rows.length; k++) s += vals[k] * y[rows[k]];
             out[j] = s;
         }
         return out;
@@ -278,10 +276,10 @@ final class SparseForceMethod {
 
     private double[] normalSolve(double[] byEquation) {
         double[] b = new double[m];
-        for (int i = 0; i < m; i++) b[pos[i]] = byEquation[i];
+        for (int i = 0; i < m; i++) b[scaled.position(i)] = byEquation[i];
         double[] y = normal.solve(b);
         double[] out = new double[m];
-        for (int i = 0; i < m; i++) out[i] = y[pos[i]];
+        for (int i = 0; i < m; i++) out[i] = y[scaled.position(i)];
         return out;
     }
 
@@ -312,96 +310,6 @@ final class SparseForceMethod {
     }
 
     /**
-     * The bounded faces of the plane drawing, nodes plus a ground vertex far below joined to
-     * every support, each as a list of edge ids (members first by index, then one edge per
-     * support); null when the drawing is not planar (the face count disagrees with Euler's).
-     */
-    private List<int[]> faces() {
-        List<Node> nodes = new ArrayList<>(model.nodes().values());
-        Map<String, Integer> index = new HashMap<>();
-        for (int k = 0; k < nodes.size(); k++) index.put(nodes.get(k).name(), k);
-        int nv = nodes.size() + 1, ground = nodes.size();
-        double minY = Double.POSITIVE_INFINITY, sumX = 0;
-        for (Node nd : nodes) {
-            minY = Math.min(minY, nd.yM());
-            sumX += nd.xM();
-        }
-        double[] x = new double[nv], y = new double[nv];
-        for (int k = 0; k < nodes.size(); k++) {
-            x[k] = nodes.get(k).xM();
-            y[k] = nodes.get(k).yM();
-        }
-        x[ground] = sumX / nodes.size();
-        y[ground] = minY - 1e3 * model.extentM() - 1;
-        List<int[]> edges = new ArrayList<>();
-        List<Member> members = new ArrayList<>(model.members().values());
-        for (Member mem : members) edges.add(new int[]{index.get(mem.from()), index.get(mem.to())});
-        supportNodes = new ArrayList<>();
-        for (Support s : model.supports().values()) {
-            edges.add(new int[]{index.get(s.node()), ground});
-            supportNodes.add(s.node());
-        }
-        memberList = members;
-        int ne = edges.size();
-        List<List<Integer>> out = new ArrayList<>();
-        for (int v = 0; v < nv; v++) out.add(new ArrayList<>());
-        for (int e = 0; e < ne; e++) {
-            out.get(edges.get(e)[0]).add(2 * e);
-            out.get(edges.get(e)[1]).add(2 * e + 1);
-        }
-        double[] angle = new double[2 * ne];
-        int[] head = new int[2 * ne], tail = new int[2 * ne];
-        for (int e = 0; e < ne; e++) {
-            int a = edges.get(e)[0], b = edges.get(e)[1];
-            tail[2 * e] = a;
-            head[2 * e] = b;
-            tail[2 * e + 1] = b;
-            head[2 * e + 1] = a;
-            angle[2 * e] = Math.atan2(y[b] - y[a], x[b] - x[a]);
-            angle[2 * e + 1] = Math.atan2(y[a] - y[b], x[a] - x[b]);
-        }
-        int[] slot = new int[2 * ne];
-        for (int v = 0; v < nv; v++) {
-            List<Integer> l = out.get(v);
-            l.sort((p, q) -> angle[p] != angle[q] ? Double.compare(angle[p], angle[q]) : Integer.compare(p, q));
-            for (int k = 0; k < l.size(); k++) slot[l.get(k)] = k;
-        }
-        boolean[] used = new boolean[2 * ne];
-        List<int[]> faces = new ArrayList<>();
-        List<Double> areas = new ArrayList<>();
-        for (int h0 = 0; h0 < 2 * ne; h0++) {
-            if (used[h0]) continue;
-            List<Integer> face = new ArrayList<>();
-            double area = 0;
-            int h = h0;
-            int guard = 0;
-            while (!used[h]) {
-                used[h] = true;
-                face.add(h / 2);
-                area += x[tail[h]] * y[head[h]] - x[head[h]] * y[tail[h]];
-                int v = head[h], twin = h ^ 1;
-                List<Integer> l = out.get(v);
-                int k = slot[twin];
-                h = l.get((k - 1 + l.size()) % l.size()); // the next edge clockwise from the way back
-                if (++guard > 4 * ne + 4) return null;
-            }
-            faces.add(face.stream().mapToInt(Integer::intValue).toArray());
-            areas.add(area / 2);
-        }
-        // the outer face is the one of most negative area; Euler: bounded faces = E - V + 1 (connected)
-        int outer = 0;
-        for (int k = 1; k < areas.size(); k++) if (areas.get(k) < areas.get(outer)) outer = k;
-        if (faces.size() - 1 != ne - nv + 1) return null;
-        List<int[]> bounded = new ArrayList<>();
-        for (int k = 0; k < faces.size(); k++) {
-            if (k == outer) continue;
-            if (areas.get(k) < -1e-9 * model.extentM() * model.extentM()) return null; // a second negative face: crossings
-            bounded.add(faces.get(k));
-        }
-        return bounded;
-    }
-
-    /**
      * Removes from w its components along the orthonormal basis (twice, for accuracy); if a
      * part of at least 1e-6 of w remains, normalizes it, adds it to the basis and returns true.
      */
@@ -426,7 +334,8 @@ final class SparseForceMethod {
         return true;
     }
 
-    private Map<String, List<Integer>> unknownsOfMember, unknownsOfSupport;
+    /** The unknowns (columns) owned by each member, and by each support. */
+    private final Map<String, List<Integer>> unknownsOfMember = new HashMap<>(), unknownsOfSupport = new HashMap<>();
 
     /** Index of the states found so far by the unknowns they involve. */
     private final Map<Integer, List<Integer>> statesByUnknown = new HashMap<>();
@@ -438,34 +347,22 @@ final class SparseForceMethod {
         }
     }
 
-    private List<Member> memberList;
-    private List<String> supportNodes;
-
     /**
      * The self-stress states local to one ring (or union of rings): the null space of its own
      * equilibrium equations, less the span of the {@code known} states it contains.
      */
-    private List<Map<Integer, Double>> ringStates(int[] face, List<Map<Integer, Double>> known) {
+    private List<Map<Integer, Double>> ringStates(PlaneDrawing drawing, int[] face, List<Map<Integer, Double>> known) {
         java.util.Set<String> memberNames = new java.util.LinkedHashSet<>(), supports = new java.util.LinkedHashSet<>();
         for (int e : face) {
-            if (e < memberList.size()) memberNames.add(memberList.get(e).name());
-            else supports.add(supportNodes.get(e - memberList.size()));
-        }
-        if (unknownsOfMember == null) {
-            unknownsOfMember = new HashMap<>();
-            unknownsOfSupport = new HashMap<>();
-            for (int j = 0; j < n; j++) {
-                EquilibriumMatrix.Unknown u = eq.unknowns().get(j);
-                (u.kind() == EquilibriumMatrix.Kind.REACTION ? unknownsOfSupport : unknownsOfMember)
-                        .computeIfAbsent(u.owner(), k -> new ArrayList<>()).add(j);
-            }
+            if (drawing.isMember(e)) memberNames.add(drawing.members().get(e).name());
+            else supports.add(drawing.supportNodes().get(e - drawing.members().size()));
         }
         List<Integer> cols = new ArrayList<>();
         for (String mem : memberNames) cols.addAll(unknownsOfMember.getOrDefault(mem, List.of()));
         for (String sup : supports) cols.addAll(unknownsOfSupport.getOrDefault(sup, List.of()));
         java.util.Collections.sort(cols);
         java.util.TreeSet<Integer> rows = new java.util.TreeSet<>();
-        for (int j : cols) for (int i : colRows[j]) rows.add(i);
+        for (int j : cols) for (int i : scaled.columnRows(j)) rows.add(i);
         List<Integer> rowList = new ArrayList<>(rows);
         Map<Integer, Integer> rowAt = new HashMap<>();
         for (int k = 0; k < rowList.size(); k++) rowAt.put(rowList.get(k), k);
@@ -473,7 +370,9 @@ final class SparseForceMethod {
         double[][] a = new double[nr][nc];
         for (int c = 0; c < nc; c++) {
             int j = cols.get(c);
-            for (int k = 0; k < colRows[j].length; k++) a[rowAt.get(colRows[j][k])][c] = colVals[j][k];
+            int[] colRows = scaled.columnRows(j);
+            double[] vals = scaled.columnValues(j);
+            for (int k = 0; k < colRows.length; k++) a[rowAt.get(colRows[k])][c] = vals[k];
         }
         List<Map<Integer, Double>> out = new ArrayList<>();
         if (nc == 0) return out;
