@@ -29,7 +29,10 @@ public sealed interface LoadSetResult {
 
     Peak peak(String member, String quantity);
 
-    double equilibriumResidual();
+    /** The worst equilibrium residual of the states the set is made of (NaN, if any, is the worst). */
+    default double equilibriumResidual() {
+        return solutions().stream().mapToDouble(Solution::equilibriumResidual).max().orElse(0);
+    }
 
     /** The state drawn and listed for the set: the solution itself, or every patterned load on. */
     Solution representative();
@@ -62,10 +65,6 @@ public sealed interface LoadSetResult {
         public Peak peak(String member, String quantity) {
             MemberSolution m = solution.members().get(member);
             return new Peak(m.peaks().value(quantity), m.peaks().position(quantity), List.of());
-        }
-
-        public double equilibriumResidual() {
-            return solution.equilibriumResidual();
         }
 
         public List<Solution> solutions() {
@@ -149,12 +148,6 @@ public sealed interface LoadSetResult {
                 case "M" -> r.moment();
                 default -> r.deflection();
             };
-        }
-
-        public double equilibriumResidual() {
-            double w = fixed.equilibriumResidual();
-            for (Part p : parts) w = Math.max(w, p.solution().equilibriumResidual());
-            return Math.max(w, allOn.equilibriumResidual());
         }
 
         public List<Solution> solutions() {
