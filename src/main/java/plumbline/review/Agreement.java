@@ -73,7 +73,7 @@ public final class Agreement {
             for (var ms : x.members().entrySet()) {
                 Member mem = model.member(ms.getKey());
                 double len = model.lengthM(mem), e = model.materialOf(mem).ePa();
-                double axial = Math.max(Math.abs(ms.getValue().peaks().value("N_abs")), 0) * len / (e * model.sectionOf(mem).areaM2());
+                double axial = Math.abs(ms.getValue().peaks().value("N_abs")) * len / (e * model.sectionOf(mem).areaM2());
                 double ei = e * model.sectionOf(mem).inertiaM4();
                 double bending = Double.isFinite(ei) && ei > 0 ? ms.getValue().peaks().value("M_abs") * len * len / ei : 0;
                 scale[2] = Math.max(scale[2], axial + bending);

@@ -134,4 +134,57 @@ class AgreementFigureTest {
         doubled.put("A", new double[]{0, 2 * FORCE, BASE.reactions().get("A")[2]});
         assertEquals(0.5, figure(new Solution("W", BASE.displacements(), doubled, BASE.members(), 0)), 1e-9, "37.5 kN against 75 kN");
     }
+
+    @Test
+    void whereNothingIsStrainedTheFloorsComeFromTheRigidMotion() {
+        // a simple beam (EA = 200 GPa x 0.01 m2 = 2e9 N, L = 6 m) whose roller settles 10 mm: it turns as a rigid
+        // body, so every force is rounding. Forces are then judged against 1e-5 EA u / L = 1e-5 x 2e9 x 0.01 / 6 =
+        // 33.33 N, moments against 1e-5 EA u = 200 N*m, translations against u = 0.01 m, rotations against u / L
+        Model m = Models.yaml(Models.HEAD + """
+                nodes: {A: [0, 0], B: [6, 0]}
+                supports: {A: pinned, B: roller}
+                members: {M1: {from: A, to: B, section: G}}
+                loads: {S: {type: settlement, settlements: [{node: B, uy: -10 mm}]}}
+                """);
+        Solution base = new StiffnessEngine().solve(m).cases().get("S");
+        java.util.function.Function<Solution, Double> fig = x -> Agreement.maxRelativeDifference(m, Map.of("S", base), Map.of("S", x));
+        MemberSolution ms = base.members().get("M1");
+        double[] f = ms.endForcesLocal();
+        f[4] += 1.0;
+        Solution force = new Solution("S", base.displacements(), base.reactions(),
+                Map.of("M1", new MemberSolution(f, ms.vStartM(), ms.vEndM(), ms.actions(), ms.response(), ms.peaks())), 0);
+        assertEquals(1.0 / (1e-5 * 2e9 * 0.01 / 6), fig.apply(force), 1e-6, "1 N against 33.33 N");
+        double[] g = ms.endForcesLocal();
+        g[2] += 2.0;
+        Solution moment = new Solution("S", base.displacements(), base.reactions(),
+                Map.of("M1", new MemberSolution(g, ms.vStartM(), ms.vEndM(), ms.actions(), ms.response(), ms.peaks())), 0);
+        assertEquals(2.0 / (1e-5 * 2e9 * 0.01), fig.apply(moment), 1e-6, "2 N*m against 200 N*m");
+        Map<String, double[]> d = new LinkedHashMap<>();
+        base.displacements().forEach((n, v) -> d.put(n, v.clone()));
+        d.get("A")[0] += 1e-4;
+        assertEquals(0.01, fig.apply(new Solution("S", d, base.reactions(), base.members(), 0)), 1e-6, "0.1 mm against 10 mm");
+        Map<String, double[]> t = new LinkedHashMap<>();
+        base.displacements().forEach((n, v) -> t.put(n, v.clone()));
+        t.get("A")[2] += 0.01 * (0.01 / 6);
+        assertEquals(0.01, fig.apply(new Solution("S", t, base.reactions(), base.members(), 0)), 1e-6, "rotation against u / L");
+    }
+
+    @Test
+    void aDifferenceWhereNothingActsIsJudgedAgainstItself() {
+        // no load, no movement: every scale is the rounding floor, 1e-12 of EA; a planted newton is far beyond it
+        Model m = Models.yaml(Models.HEAD + """
+                nodes: {A: [0, 0], B: [6, 0]}
+                supports: {A: pinned, B: roller}
+                members: {M1: {from: A, to: B, section: G}}
+                loads: {Z: {type: dead, node_loads: [{node: B, Fx: 0}]}}
+                """);
+        Solution base = new StiffnessEngine().solve(m).cases().get("Z");
+        Map<String, double[]> r = new LinkedHashMap<>();
+        base.reactions().forEach((n, v) -> r.put(n, v.clone()));
+        r.get("A")[1] += 1.0;
+        double fig = Agreement.maxRelativeDifference(m, Map.of("Z", base), Map.of("Z", new Solution("Z", base.displacements(), r, base.members(), 0)));
+        // the force scale is then the planted newton itself (the larger of either solution): 1 N against 1 N
+        assertEquals(1.0, fig, 1e-9);
+        assertEquals(0.0, Agreement.maxRelativeDifference(m, Map.of("Z", base), Map.of("Z", base)));
+    }
 }
