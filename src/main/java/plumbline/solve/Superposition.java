@@ -27,12 +27,10 @@ public final class Superposition {
             add(reac, p.getKey().reactions(), p.getValue());
         }
         Map<String, MemberSolution> members = new LinkedHashMap<>();
-        double residual = 0;
         for (Member m : model.members().values()) {
             double[] f = new double[6];
             double vs = 0, ve = 0;
             MemberActions a = MemberActions.none(model.lengthM(m));
-            double ei = Double.NaN;
             for (var p : parts.entrySet()) {
                 MemberSolution s = p.getKey().members().get(m.name());
                 double k = p.getValue();
@@ -47,7 +45,7 @@ public final class Superposition {
         Map<String, Double> factors = new LinkedHashMap<>();
         for (var p : parts.entrySet()) factors.merge(p.getKey().name(), p.getValue(), Double::sum);
         Solution s = new Solution(name, disp, reac, members, 0);
-        residual = Equilibrium.residual(model, s, factors);
+        double residual = Equilibrium.residual(model, s, factors);
         return new Solution(name, disp, reac, members, residual);
     }
 

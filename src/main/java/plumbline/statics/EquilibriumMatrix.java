@@ -79,13 +79,6 @@ public final class EquilibriumMatrix {
         return lengthScale;
     }
 
-    /** The whole matrix, dense (for small models only). */
-    public double[][] dense() {
-        double[][] c = new double[equations.size()][unknowns.size()];
-        for (int j = 0; j < rows.length; j++) for (int k = 0; k < rows[j].length; k++) c[rows[j][k]][j] += values[j][k];
-        return c;
-    }
-
     public static EquilibriumMatrix of(Model model) {
         java.util.Set<String> rotation = model.rotationalNodes();
         List<Equation> eqs = new ArrayList<>();
