@@ -86,6 +86,38 @@ class ClosedFormMemberTest {
         assertEquals(len / 2, t.deflection().xM(), 1e-9);
     }
 
+    @Test
+    void rootsByBracketingAndByLaguerre() {
+        // (u - 1)(u - 2)(u - 3) = -6 + 11u - 6u^2 + u^3
+        double[] cubic = {-6, 11, -6, 1};
+        assertArrayEquals(new double[]{1, 2, 3}, ClosedFormMember.bracketedRoots(cubic, 4), 1e-12);
+        double[] laguerre = ClosedFormMember.realRoots(cubic, 4);
+        Arrays.sort(laguerre);
+        assertArrayEquals(new double[]{1, 2, 3}, laguerre, 1e-12);
+        // a root on a grid point (0.5 = 4 x 32 / 256) is taken as it is, and one at the end of the span too
+        assertArrayEquals(new double[]{0.5}, ClosedFormMember.bracketedRoots(new double[]{-0.5, 1}, 4), 0);
+        assertArrayEquals(new double[]{4}, ClosedFormMember.bracketedRoots(new double[]{-4, 1}, 4), 0);
+        // none inside: u^2 + 1
+        assertArrayEquals(new double[0], ClosedFormMember.bracketedRoots(new double[]{1, 0, 1}, 4));
+        // sqrt 2 between grid points, bisected to rounding
+        assertArrayEquals(new double[]{Math.sqrt(2)}, ClosedFormMember.bracketedRoots(new double[]{-2, 0, 1}, 3), 1e-15);
+    }
+
+    @Test
+    void aLevelPeakIsReportedWhereItStarts() {
+        // equal and opposite end moments: M constant = 5 kN*m along 4 m; its largest and least value are where
+        // it starts (x = 0), as the shared functions report
+        MemberActions a = MemberActions.none(4);
+        Peaks p = ClosedFormMember.of(new double[]{0, 0, -5e3}, a).peaks(1e7, 0, 0, 0);
+        assertEquals(5e3, p.mMax().value(), 1e-9);
+        assertEquals(0, p.mMax().xM(), 0);
+        assertEquals(5e3, p.mMin().value(), 1e-9);
+        assertEquals(0, p.mMin().xM(), 0);
+        Peaks shared = MemberResponse.of(new double[]{0, 0, -5e3, 0, 0, 5e3}, a, 1e7, 0, 0).peaks();
+        assertEquals(shared.mMax().xM(), p.mMax().xM(), 0);
+        assertEquals(shared.mMin().xM(), p.mMin().xM(), 0);
+    }
+
     /** A member with random loads of every kind, at random places (ends included). */
     static MemberActions random(Random rnd, double len) {
         List<MemberActions.Linear> d = new ArrayList<>();
