@@ -32,7 +32,7 @@ final class CheckCommand implements Callable<Integer> {
     Path figures;
 
     @Option(names = "--tolerance", paramLabel = "PCT", converter = PercentConverter.class,
-            description = "relative tolerance for every claim without its own, e.g. 5%% (default: by kind, reactions 3%%, "
+            description = "relative tolerance for every claim whose claim and claims file set none, e.g. 5%% (default: by kind, reactions 3%%, "
                     + "member forces 5%%, deflections 10%%)")
     Double tolerance;
 

@@ -7,9 +7,11 @@ import plumbline.model.ClaimSet;
 /**
  * Which relative tolerance applies to a claim, and why. Defaults by quantity kind are
  * common practice for an independent check of a linear model: reactions 3%, member forces
- * 5%, deflections and displacements 10%. A tolerance on the claim itself wins, then the
- * checker's {@code --tolerance}, then the claims file's setting for the kind, then its
- * {@code default}, then the built-in default.
+ * 5%, deflections and displacements 10%. The most specific setting wins: a tolerance on
+ * the claim itself, then the claims file's setting for the kind of quantity, then the
+ * file's {@code default}, then the checker's {@code --tolerance} for the whole run, then the
+ * built-in default for the kind. A difference beyond the tolerance but within
+ * {@link #MARGINAL_FACTOR} times it is marginal; beyond that, a mismatch.
  */
 public record TolerancePolicy(double commandLine) {
 
@@ -45,12 +47,12 @@ public record TolerancePolicy(double commandLine) {
 
     public Applied forClaim(Claim c, ClaimSet file) {
         if (!Double.isNaN(c.toleranceOverride())) return new Applied(c.toleranceOverride(), "set on the claim");
-        if (!Double.isNaN(commandLine)) return new Applied(commandLine, "--tolerance");
         String key = kindKey(c);
         Map<String, Double> t = file.tolerances();
         if (t.containsKey(key)) return new Applied(t.get(key), "claims file, " + key);
         if (key.equals("displacement") && t.containsKey("deflection")) return new Applied(t.get("deflection"), "claims file, deflection");
         if (t.containsKey("default")) return new Applied(t.get("default"), "claims file, default");
+        if (!Double.isNaN(commandLine)) return new Applied(commandLine, "--tolerance");
         return switch (key) {
             case "reaction" -> new Applied(REACTION_DEFAULT, "default for reactions (common practice)");
             case "member" -> new Applied(MEMBER_DEFAULT, "default for member forces (common practice)");

@@ -54,7 +54,7 @@ class ReviewTest {
     }
 
     @Test
-    void toleranceOrderClaimThenCommandLineThenFileThenDefault() {
+    void toleranceOrderClaimThenFileThenCommandLineThenDefault() {
         String claims = """
                 claims:
                   tolerance: {reaction: 1%}
@@ -62,20 +62,34 @@ class ReviewTest {
                     - {node: A, combo: D, Fy: 30.5}
                     - {node: B, combo: D, Fy: 30.5, tolerance: 0.5%}
                 """;
-        // 30.5 against 30: 1.7% off
+        // 30.5 against 30: 1.7% off; within twice 1% is marginal, beyond twice 0.5% a mismatch
         Review fileOnly = review(claims, Double.NaN);
         assertEquals(0.01, fileOnly.claims().get(0).tolerance().relative());
+        assertEquals("claims file, reaction", fileOnly.claims().get(0).tolerance().why());
         assertEquals(ClaimResult.Status.MARGINAL, fileOnly.claims().get(0).status());
         assertEquals(0.005, fileOnly.claims().get(1).tolerance().relative());
+        assertEquals("set on the claim", fileOnly.claims().get(1).tolerance().why());
         assertEquals(ClaimResult.Status.MISMATCH, fileOnly.claims().get(1).status());
+        // --tolerance does not override what the claims file sets: the file is more specific
         Review cli = review(claims, 0.05);
-        assertEquals(ClaimResult.Status.OK, cli.claims().get(0).status());
-        assertEquals("--tolerance", cli.claims().get(0).tolerance().why());
+        assertEquals(0.01, cli.claims().get(0).tolerance().relative(), "the file's tolerance wins over --tolerance");
+        assertEquals(ClaimResult.Status.MARGINAL, cli.claims().get(0).status());
         assertEquals(0.005, cli.claims().get(1).tolerance().relative(), "the claim's own tolerance wins");
-        Review dflt = review(claims.replace("  tolerance: {reaction: 1%}\n", ""), Double.NaN);
+        // a file's default is still more specific than --tolerance
+        Review fileDefault = review(claims.replace("{reaction: 1%}", "{default: 1%}"), 0.05);
+        assertEquals(0.01, fileDefault.claims().get(0).tolerance().relative());
+        assertEquals("claims file, default", fileDefault.claims().get(0).tolerance().why());
+        // with nothing in the file, --tolerance applies to every claim without its own
+        String bare = claims.replace("  tolerance: {reaction: 1%}\n", "");
+        Review cliOnly = review(bare, 0.05);
+        assertEquals(0.05, cliOnly.claims().get(0).tolerance().relative());
+        assertEquals("--tolerance", cliOnly.claims().get(0).tolerance().why());
+        assertEquals(ClaimResult.Status.OK, cliOnly.claims().get(0).status());
+        assertEquals(0.005, cliOnly.claims().get(1).tolerance().relative());
+        Review dflt = review(bare, Double.NaN);
         assertEquals(TolerancePolicy.REACTION_DEFAULT, dflt.claims().get(0).tolerance().relative());
         assertEquals(ClaimResult.Status.OK, dflt.claims().get(0).status());
-        assertTrue(String.format(Locale.ROOT, "%s", dflt.claims().get(0).tolerance().why()).contains("common practice"));
+        assertEquals("default for reactions (common practice)", dflt.claims().get(0).tolerance().why());
     }
 
     @Test
