@@ -33,8 +33,8 @@ public final class StandardCombinations {
     private StandardCombinations() {
     }
 
-    /** One variable action: the cases that act together and the ASCE symbol of their type. */
-    private record Action(String symbol, Map<String, Double> cases) {
+    /** One action: the load cases that act together (each at its full value) and the symbol of their type. */
+    private record Action(String symbol, List<String> cases) {
     }
 
     public static List<LoadSet> expand(Model model) {
@@ -51,26 +51,25 @@ public final class StandardCombinations {
         return out;
     }
 
-    private static Map<String, Double> byType(Model model, String type) {
-        Map<String, Double> m = new LinkedHashMap<>();
-        for (LoadCase c : model.loadCases()) if (type.equals(c.type())) m.put(c.name(), 1.0);
-        return m;
+    private static List<String> byType(Model model, String type) {
+        List<String> out = new ArrayList<>();
+        for (LoadCase c : model.loadCases()) if (type.equals(c.type())) out.add(c.name());
+        return out;
     }
 
     /** Alternatives of one type: wind and seismic cases one at a time, other types all together. */
     private static List<Action> alternatives(Model model, String type, String symbol) {
         List<Action> out = new ArrayList<>();
-        Map<String, Double> all = byType(model, type);
-        if (all.isEmpty()) return out;
+        List<String> all = byType(model, type);
         if (type.equals("wind") || type.equals("seismic")) {
-            for (String c : all.keySet()) out.add(new Action(all.size() == 1 ? symbol : symbol + "(" + c + ")", Map.of(c, 1.0)));
-        } else {
+            for (String c : all) out.add(new Action(all.size() == 1 ? symbol : symbol + "(" + c + ")", List.of(c)));
+        } else if (!all.isEmpty()) {
             out.add(new Action(symbol, all));
         }
         return out;
     }
 
-    private static final Action NONE = new Action("", Map.of());
+    private static final Action NONE = new Action("", List.of());
 
     /** Terms: a factor and the alternatives of the action it multiplies (or NONE for absent). */
     private record Term(double factor, List<Action> choices) {
@@ -80,26 +79,28 @@ public final class StandardCombinations {
         return a.isEmpty() ? List.of(NONE) : a;
     }
 
+    /**
+     * One combination per choice of alternatives (a wind case, a seismic case), named by the
+     * set, the clause's label and the symbols of the alternatives chosen where a term has
+     * more than one. Every combination begins with the dead load, so none is empty. One whose
+     * factors repeat an earlier one's is listed once, under the earlier name (with no
+     * accompanying action, 6.10a is 1.35G, the same as "permanent actions only").
+     */
     private static void emit(List<LoadSet> out, String prefix, String label, String origin, Term... terms) {
-        // every term must have something when it is required (factor applies to a present action)
-        List<List<Action>> choices = new ArrayList<>();
-        for (Term t : terms) choices.add(t.choices());
         int[] idx = new int[terms.length];
         while (true) {
             Map<String, Double> f = new LinkedHashMap<>();
             StringBuilder name = new StringBuilder(prefix).append('/').append(label);
             for (int k = 0; k < terms.length; k++) {
-                Action a = choices.get(k).get(idx[k]);
-                for (var e : a.cases().entrySet()) f.merge(e.getKey(), terms[k].factor() * e.getValue(), Double::sum);
-                if (!a.symbol().isEmpty() && choices.get(k).size() > 1) name.append('-').append(a.symbol());
+                List<Action> choices = terms[k].choices();
+                Action a = choices.get(idx[k]);
+                for (String c : a.cases()) f.merge(c, terms[k].factor(), Double::sum);
+                if (choices.size() > 1) name.append('-').append(a.symbol());
             }
-            if (!f.isEmpty()) {
-                String n = name.toString();
-                boolean dup = out.stream().anyMatch(s -> s.factors().equals(f));
-                if (!dup && out.stream().noneMatch(s -> s.name().equals(n))) out.add(new LoadSet(n, f, origin, true));
-            }
+            if (out.stream().noneMatch(x -> x.factors().equals(f))) out.add(new LoadSet(name.toString(), f, origin, true));
+            // the next choice, odometer-wise from the last term
             int k = terms.length - 1;
-            while (k >= 0 && ++idx[k] == choices.get(k).size()) idx[k--] = 0;
+            while (k >= 0 && ++idx[k] == terms[k].choices().size()) idx[k--] = 0;
             if (k < 0) break;
         }
     }
@@ -165,6 +166,11 @@ public final class StandardCombinations {
     private static final List<Variable> VARIABLES = List.of(new Variable("live", "Q", 0.7), new Variable("roof-live", "Qr", 0.0),
             new Variable("snow", "S", 0.5), new Variable("wind", "W", 0.6), new Variable("rain", "R", 0.0));
 
+    /** A factor as written in a clause: four decimals at most, no trailing zeros (1.35, 1.1475). */
+    private static String factor(double f) {
+        return new java.math.BigDecimal(String.format(Locale.ROOT, "%.4f", f)).stripTrailingZeros().toPlainString();
+    }
+
     private static List<LoadSet> en1990(Model model, boolean ab) {
         List<LoadSet> out = new ArrayList<>();
         List<Action> g = alternatives(model, "dead", "G");
@@ -192,7 +198,7 @@ public final class StandardCombinations {
                 acc.append(String.format(Locale.ROOT, " + %.2f%s", 1.5 * v.psi0(), v.symbol()));
             }
             String expr = ab ? "(6.10b)" : "(6.10)";
-            emit(out, set, (ab ? "b-" : "") + lead.symbol(), ed + "expression " + expr + ": " + String.format(Locale.ROOT, "%.4gG", gSup)
+            emit(out, set, (ab ? "b-" : "") + lead.symbol(), ed + "expression " + expr + ": " + factor(gSup) + "G"
                     + " + 1.5" + lead.symbol() + " (leading)" + acc, terms.toArray(new Term[0]));
             // the permanent action favourable: gamma_G,inf = 1.0 with the leading action alone
             emit(out, set, (ab ? "b-" : "") + lead.symbol() + "-inf", ed + "expression " + expr + ", permanent action favourable: 1.0G + 1.5"

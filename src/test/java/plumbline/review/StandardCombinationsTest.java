@@ -170,6 +170,11 @@ class StandardCombinationsTest {
         assertEquals(13, StandardCombinations.expand(everyType("en1990-6.10")).size());
         assertEquals(15, StandardCombinations.expand(everyType("en1990-6.10ab")).size());
         for (String set : StandardCombinations.SETS) {
+            List<LoadSet> sets = StandardCombinations.expand(everyType(set));
+            assertEquals(sets.size(), sets.stream().map(LoadSet::name).distinct().count(), set + ": names are unique");
+            assertEquals(sets.size(), sets.stream().map(LoadSet::factors).distinct().count(), set + ": no combination repeats another");
+        }
+        for (String set : StandardCombinations.SETS) {
             for (LoadSet s : StandardCombinations.expand(everyType(set))) {
                 assertTrue(s.origin().startsWith(set.startsWith("asce7") ? "ASCE/SEI 7-16 section 2." : "EN 1990:2002+A1:2005"), s.origin());
             }
@@ -213,5 +218,58 @@ class StandardCombinationsTest {
                   E: {type: seismic, node_loads: [{node: B, Fx: 2}]}
                 standard_combinations: [%s]
                 """.formatted(set));
+    }
+
+    /** A model with a dead case and the cases of the types whose bits are set in {@code mask}. */
+    static Model withTypes(int mask, String set) {
+        String[][] types = {{"L", "live"}, {"Lr", "roof-live"}, {"S", "snow"}, {"R", "rain"}, {"W1", "wind"}, {"W2", "wind"}, {"E", "seismic"}};
+        StringBuilder loads = new StringBuilder("  D: {type: dead, member_loads: [{member: M1, w: -5}]}\n");
+        for (int b = 0; b < types.length; b++) {
+            if ((mask & (1 << b)) != 0) loads.append("  ").append(types[b][0]).append(": {type: ").append(types[b][1])
+                    .append(", node_loads: [{node: B, Fx: 1}]}\n");
+        }
+        return Models.yaml(plumbline.Models.HEAD + "nodes: {A: [0, 0], B: [6, 0]}\nsupports: {A: pinned, B: roller}\n"
+                + "members: {M1: {from: A, to: B, section: G}}\nloads:\n" + loads + "standard_combinations: [" + set + "]\n");
+    }
+
+    @Test
+    void whateverTheTypesPresentNoCombinationRepeatsAnotherAndNoneIsEmpty() {
+        for (String set : StandardCombinations.SETS) {
+            for (int mask = 0; mask < 128; mask++) {
+                List<LoadSet> sets = StandardCombinations.expand(withTypes(mask, set));
+                assertTrue(!sets.isEmpty(), set + " " + mask);
+                assertEquals(sets.size(), sets.stream().map(LoadSet::name).distinct().count(), set + " " + mask + ": names unique");
+                assertEquals(sets.size(), sets.stream().map(LoadSet::factors).distinct().count(), set + " " + mask + ": factors unique "
+                        + sets.stream().map(x -> x.name() + x.factors()).toList());
+                for (LoadSet x : sets) assertTrue(x.factors().get("D") > 0, x.name() + " carries the dead load");
+            }
+        }
+    }
+
+    @Test
+    void theClauseOfEachEurocodeCombinationNamesItsFactors() {
+        // EN 1990 (6.10) with live (psi_0 0.7), snow (0.5) and wind (0.6): accompanying factors 1.5 psi_0 = 1.05, 0.75, 0.90
+        List<LoadSet> s = StandardCombinations.expand(everyType("en1990-6.10"));
+        String ed = "EN 1990:2002+A1:2005, Table A1.2(B), ";
+        assertEquals(ed + "expression (6.10): 1.35G + 1.5Q (leading) + 0.75S + 0.90W", origin(s, "en1990-6.10/Q-W(WL)"));
+        assertEquals(ed + "expression (6.10): 1.35G + 1.5S (leading) + 1.05Q + 0.90W", origin(s, "en1990-6.10/S-W(WR)"));
+        assertEquals(ed + "expression (6.10), permanent action favourable: 1.0G + 1.5Q", origin(s, "en1990-6.10/Q-inf"));
+        // roof live load has psi_0 = 0 (Table A1.1, category H roofs): it leads, but never accompanies
+        List<LoadSet> r = StandardCombinations.expand(withTypes(1 | 2, "en1990-6.10ab"));
+        assertEquals(ed + "expression (6.10b): 1.1475G + 1.5Q (leading)", origin(r, "en1990-6.10ab/b-Q"));
+        assertEquals(ed + "expression (6.10b): 1.1475G + 1.5Qr (leading) + 1.05Q", origin(r, "en1990-6.10ab/b-Qr"));
+        Map<String, Double> a = find(r, "en1990-6.10ab/a");
+        assertEquals(java.util.Set.of("D", "L"), a.keySet(), "6.10a: no roof live load at psi_0 = 0");
+        assertEquals(1.35, a.get("D"), 1e-12);
+        assertEquals(1.05, a.get("L"), 1e-12);
+        // dead load alone
+        List<LoadSet> g = StandardCombinations.expand(withTypes(0, "en1990-6.10"));
+        assertEquals(List.of("en1990-6.10/G"), g.stream().map(LoadSet::name).toList());
+        assertEquals(ed + "permanent actions only: 1.35G", g.get(0).origin());
+    }
+
+    static String origin(List<LoadSet> sets, String name) {
+        for (LoadSet s : sets) if (s.name().equals(name)) return s.origin();
+        throw new AssertionError("no " + name + " in " + sets.stream().map(LoadSet::name).toList());
     }
 }
