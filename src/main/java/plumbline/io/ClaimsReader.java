@@ -15,6 +15,7 @@ import plumbline.model.ClaimSet;
 import plumbline.model.InputException;
 import plumbline.model.Model;
 import plumbline.model.Problem;
+import plumbline.model.Quantity;
 import plumbline.model.SourceRef;
 import plumbline.units.Dimension;
 import plumbline.units.Unit;
@@ -29,18 +30,9 @@ import plumbline.units.Units;
  */
 public final class ClaimsReader {
 
-    public static final List<String> REACTION_KEYS = List.of("Fx", "Fy", "Mz");
-    public static final List<String> PEAK_KEYS = List.of("N_max", "N_min", "N_abs", "V_max", "V_min", "V_abs",
-            "M_max", "M_min", "M_abs", "deflection");
-    public static final List<String> DISPLACEMENT_KEYS = List.of("ux", "uy", "rz");
     static final List<String> TOLERANCE_KEYS = List.of("default", "reaction", "member", "deflection", "displacement");
 
     private ClaimsReader() {
-    }
-
-    /** The dimension of a claimed quantity (see {@link Claim#dimensionOf}). */
-    public static Dimension dimensionOf(Claim.Kind kind, String quantity) {
-        return Claim.dimensionOf(kind, quantity);
     }
 
     /** Reads a separate claims file for {@code model}. */
@@ -88,9 +80,9 @@ public final class ClaimsReader {
             }
         }
         List<Claim> claims = new ArrayList<>();
-        section(f, "reactions", Claim.Kind.REACTION, "node", REACTION_KEYS, units, problems, claims);
-        section(f, "members", Claim.Kind.MEMBER, "member", PEAK_KEYS, units, problems, claims);
-        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", DISPLACEMENT_KEYS, units, problems, claims);
+        section(f, "reactions", Claim.Kind.REACTION, "node", units, problems, claims);
+        section(f, "members", Claim.Kind.MEMBER, "member", units, problems, claims);
+        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", units, problems, claims);
         return new ClaimSet(file, source == null ? "" : source, tol, claims);
     }
 
@@ -112,8 +104,9 @@ public final class ClaimsReader {
         return Double.NaN;
     }
 
-    private static void section(Fields f, String key, Claim.Kind kind, String nameKey, List<String> quantities,
-                                UnitSystem units, List<Problem> problems, List<Claim> out) {
+    private static void section(Fields f, String key, Claim.Kind kind, String nameKey, UnitSystem units,
+                                List<Problem> problems, List<Claim> out) {
+        List<String> quantities = Quantity.symbols(kind);
         List<Tree> items = f.list(key, false, "a list of claims");
         for (int i = 0; i < items.size(); i++) {
             String p = f.field(key) + "[" + i + "]";
@@ -128,14 +121,15 @@ public final class ClaimsReader {
             String combo = g.text("combo", true, "a combination, a load case or envelope");
             double tol = g.has("tolerance") ? tolerance(g.get("tolerance"), g.field("tolerance"), problems) : Double.NaN;
             int n = 0, blank = 0;
-            for (String q : quantities) {
+            for (Quantity quantity : Quantity.of(kind)) {
+                String q = quantity.symbol;
                 if (!g.has(q)) continue;
                 if (g.get(q) instanceof Tree.Scalar sc && sc.kind() == Tree.Scalar.Kind.NULL) {
                     blank++; // a ~ left in a template: not claimed
                     continue;
                 }
                 n++;
-                Dimension d = dimensionOf(kind, q);
+                Dimension d = quantity.dimension;
                 Tree v = g.get(q);
                 double si = Fields.quantityOf(v, g.field(q), d, units, problems);
                 double written = Double.NaN;
@@ -149,11 +143,11 @@ public final class ClaimsReader {
                         // reported by quantityOf
                     }
                 }
-                if (kind == Claim.Kind.MEMBER && q.equals("deflection") && si < 0) {
+                if (quantity == Quantity.DEFLECTION && si < 0) {
                     g.problem(v.at(), q, "a deflection is a magnitude; expected a value >= 0");
                 }
                 if (name != null && combo != null && !Double.isNaN(si)) {
-                    out.add(new Claim(kind, name, combo, q, si, d, written, unit, tol, g.at(q)));
+                    out.add(new Claim(kind, name, combo, quantity, si, written, unit, tol, g.at(q)));
                 }
             }
             if (n == 0 && blank == 0) {
@@ -210,8 +204,9 @@ public final class ClaimsReader {
                     problems.add(new Problem(at, "item", "found '" + item + "'; expected reaction, member or displacement"));
                     continue;
                 }
-                List<String> qs = kind == Claim.Kind.REACTION ? REACTION_KEYS : kind == Claim.Kind.MEMBER ? PEAK_KEYS : DISPLACEMENT_KEYS;
-                if (!qs.contains(q)) {
+                List<String> qs = Quantity.symbols(kind);
+                Quantity quantity = Quantity.of(kind, q);
+                if (quantity == null) {
                     String hint = Fields.closest(q, qs);
                     problems.add(new Problem(at, "quantity", "unknown " + item + " quantity '" + q + "'"
                             + (hint != null ? "; did you mean '" + hint + "'?" : "; expected one of " + String.join(", ", qs))));
@@ -221,7 +216,7 @@ public final class ClaimsReader {
                     problems.add(new Problem(at, combo.isEmpty() ? "combo" : "name", "empty; expected a name"));
                     continue;
                 }
-                Dimension d = dimensionOf(kind, q);
+                Dimension d = quantity.dimension;
                 double value;
                 try {
                     value = Double.parseDouble(row[4].trim());
@@ -250,7 +245,7 @@ public final class ClaimsReader {
                         continue;
                     }
                 }
-                claims.add(new Claim(kind, name, combo, q, si, d, value, unitShown, Double.NaN, at));
+                claims.add(new Claim(kind, name, combo, quantity, si, value, unitShown, Double.NaN, at));
             }
         } catch (IOException | RuntimeException e) {
             problems.add(new Problem(new SourceRef(file, 0, 0), "(file)", "cannot read as CSV: " + e.getMessage()));

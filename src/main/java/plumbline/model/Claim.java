@@ -8,9 +8,8 @@ import plumbline.units.Dimension;
  * written value and unit are kept for the report and for the diagnosis of unit slips.
  * {@code toleranceOverride} is a relative tolerance given on the claim itself, NaN if none.
  */
-public record Claim(Kind item, String name, String combo, String quantity, double valueInternal,
-                    Dimension dimension, double writtenValue, String writtenUnit,
-                    double toleranceOverride, SourceRef at) {
+public record Claim(Kind item, String name, String combo, Quantity quantity, double valueInternal,
+                    double writtenValue, String writtenUnit, double toleranceOverride, SourceRef at) {
 
     public enum Kind {
         REACTION("reaction"), MEMBER("member"), DISPLACEMENT("displacement");
@@ -21,12 +20,9 @@ public record Claim(Kind item, String name, String combo, String quantity, doubl
         }
     }
 
-    /** The dimension of a claimed quantity: force or moment for reactions and member forces, length or angle else. */
-    public static Dimension dimensionOf(Kind kind, String quantity) {
-        if (kind == Kind.REACTION) return quantity.equals("Mz") ? Dimension.MOMENT : Dimension.FORCE;
-        if (kind == Kind.DISPLACEMENT) return quantity.equals("rz") ? Dimension.ANGLE : Dimension.LENGTH;
-        if (quantity.equals("deflection")) return Dimension.LENGTH;
-        return quantity.startsWith("M") ? Dimension.MOMENT : Dimension.FORCE;
+    /** Force, moment, length or angle: the dimension of what is claimed. */
+    public Dimension dimension() {
+        return quantity.dimension;
     }
 
     public String id() {

@@ -1,5 +1,7 @@
 package plumbline.report;
 
+import plumbline.model.Quantity;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -159,16 +161,16 @@ public final class Console {
             if (m.members().size() <= MEMBERS_LISTED) {
                 for (String mem : m.members().keySet()) {
                     String line = String.format(Locale.ROOT, "  member %-6s N %s..%s  V %s..%s  M %s..%s  defl %s", mem,
-                            peak(u, res, mem, "N_min"), peak(u, res, mem, "N_max"), peak(u, res, mem, "V_min"),
-                            peak(u, res, mem, "V_max"), peak(u, res, mem, "M_min"), peak(u, res, mem, "M_max"),
-                            peak(u, res, mem, "deflection"));
+                            peak(u, res, mem, Quantity.N_MIN), peak(u, res, mem, Quantity.N_MAX), peak(u, res, mem, Quantity.V_MIN),
+                            peak(u, res, mem, Quantity.V_MAX), peak(u, res, mem, Quantity.M_MIN), peak(u, res, mem, Quantity.M_MAX),
+                            peak(u, res, mem, Quantity.DEFLECTION));
                     sb.append(wrap(line, "    "));
                 }
             } else {
                 String worstM = null, worstD = null;
                 double bm = -1, bd = -1;
                 for (String mem : m.members().keySet()) {
-                    double vm = res.peak(mem, "M_abs").value(), vd = res.peak(mem, "deflection").value();
+                    double vm = res.peak(mem, Quantity.M_ABS).value(), vd = res.peak(mem, Quantity.DEFLECTION).value();
                     if (vm > bm) {
                         bm = vm;
                         worstM = mem;
@@ -187,8 +189,8 @@ public final class Console {
         return sb.toString();
     }
 
-    private static String peak(UnitSystem u, plumbline.review.LoadSetResult r, String member, String q) {
-        return fmt(u.fromInternal(r.peak(member, q).value(), Claim.dimensionOf(Claim.Kind.MEMBER, q)));
+    private static String peak(UnitSystem u, plumbline.review.LoadSetResult r, String member, Quantity q) {
+        return fmt(u.fromInternal(r.peak(member, q).value(), q.dimension));
     }
 
     static String pct(double rel) {

@@ -1,5 +1,7 @@
 package plumbline.report;
 
+import plumbline.model.Quantity;
+
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
@@ -383,7 +385,7 @@ public final class Drawings {
         double force = 0, peak = 0;
         for (double[] r : s.reactions().values()) force = Math.max(force, Math.hypot(r[0], r[1]));
         for (MemberSolution ms : s.members().values()) {
-            force = Math.max(force, Math.max(ms.peaks().value("N_abs"), ms.peaks().value("V_abs")));
+            force = Math.max(force, Math.max(ms.peaks().value(Quantity.N_ABS), ms.peaks().value(Quantity.V_ABS)));
             Piecewise p = function(ms, kind);
             peak = Math.max(peak, Math.max(Math.abs(p.max().value()), Math.abs(p.min().value())));
         }

@@ -1,5 +1,7 @@
 package plumbline.report;
 
+import plumbline.model.Quantity;
+
 import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
@@ -510,7 +512,7 @@ public final class PdfReport {
             for (LoadSet s : a.loadSets()) {
                 double mm = 0;
                 for (var ms : a.solutions().get(a.primaryEngine()).get(s.name()).representative().members().values()) {
-                    mm = Math.max(mm, ms.peaks().value("M_abs"));
+                    mm = Math.max(mm, ms.peaks().value(Quantity.M_ABS));
                 }
                 boolean preferred = best == null || (s.combination() && !isCombination(a, best)) || (s.combination() == isCombination(a, best) && mm > bestM);
                 if (preferred) {

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import plumbline.model.Claim;
 import plumbline.model.Model;
+import plumbline.model.Quantity;
 import plumbline.review.Analysis;
 import plumbline.review.ClaimResult;
 import plumbline.review.LoadSet;
@@ -27,7 +28,7 @@ import plumbline.units.UnitSystem;
 public final class ResultsTree {
 
     public static final String TOOL_VERSION = "1.0.0";
-    static final String[] PEAKS = {"N_max", "N_min", "N_abs", "V_max", "V_min", "V_abs", "M_max", "M_min", "M_abs", "deflection"};
+    static final List<Quantity> PEAKS = Quantity.of(Claim.Kind.MEMBER);
 
     private ResultsTree() {
     }
@@ -130,12 +131,11 @@ public final class ResultsTree {
             Map<String, Object> p = new LinkedHashMap<>();
             Map<String, Object> at = new LinkedHashMap<>();
             Map<String, Object> loaded = new LinkedHashMap<>();
-            for (String q : PEAKS) {
-                Dimension d = Claim.dimensionOf(Claim.Kind.MEMBER, q);
+            for (Quantity q : PEAKS) {
                 LoadSetResult.Peak pk = r.peak(name, q);
-                p.put(q, out(u, pk.value(), d));
-                at.put(q, out(u, pk.xM(), Dimension.LENGTH));
-                if (r.patterned()) loaded.put(q, pk.loadedMembers());
+                p.put(q.symbol, out(u, pk.value(), q.dimension));
+                at.put(q.symbol, out(u, pk.xM(), Dimension.LENGTH));
+                if (r.patterned()) loaded.put(q.symbol, pk.loadedMembers());
             }
             p.put("at", at);
             if (r.patterned()) p.put("loaded_members", loaded);
@@ -164,18 +164,18 @@ public final class ResultsTree {
         Map<String, Object> members = new LinkedHashMap<>();
         for (String mem : m.members().keySet()) {
             Map<String, Object> one = new LinkedHashMap<>();
-            for (String q : PEAKS) {
+            for (Quantity q : PEAKS) {
                 double best = Double.NaN;
                 String gov = null;
                 for (LoadSet s : combos) {
                     double v = sols.get(s.name()).peak(mem, q).value();
-                    boolean better = Double.isNaN(best) || (q.endsWith("_min") ? v < best : v > best);
+                    boolean better = Double.isNaN(best) || (q.extreme == Quantity.Extreme.MIN ? v < best : v > best);
                     if (better) {
                         best = v;
                         gov = s.name();
                     }
                 }
-                one.put(q, map("value", out(u, best, Claim.dimensionOf(Claim.Kind.MEMBER, q)), "governing", gov));
+                one.put(q.symbol, map("value", out(u, best, q.dimension), "governing", gov));
             }
             members.put(mem, one);
         }
@@ -239,7 +239,7 @@ public final class ResultsTree {
         o.put("combo", c.combo());
         o.put("item", c.item().word);
         o.put("name", c.name());
-        o.put("quantity", c.quantity());
+        o.put("quantity", c.quantity().symbol);
         o.put("claimed", out(u, c.valueInternal(), c.dimension()));
         o.put("computed", out(u, r.computed(), c.dimension()));
         o.put("computed_force_method", out(u, r.computedForce(), c.dimension()));

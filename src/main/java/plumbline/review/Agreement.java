@@ -1,5 +1,7 @@
 package plumbline.review;
 
+import plumbline.model.Quantity;
+
 import java.util.Map;
 import plumbline.model.Member;
 import plumbline.model.Model;
@@ -62,7 +64,7 @@ public final class Agreement {
                 for (MemberSolution m : x.members().values()) {
                     double[] f = m.endForcesLocal();
                     scale[0] = Math.max(scale[0], Math.max(Math.max(Math.abs(f[0]), Math.abs(f[1])), Math.max(Math.abs(f[3]), Math.abs(f[4]))));
-                    scale[1] = Math.max(scale[1], Math.max(Math.max(Math.abs(f[2]), Math.abs(f[5])), m.peaks().value("M_abs")));
+                    scale[1] = Math.max(scale[1], Math.max(Math.max(Math.abs(f[2]), Math.abs(f[5])), m.peaks().value(Quantity.M_ABS)));
                     scale[2] = Math.max(scale[2], m.peaks().deflection().value());
                 }
             }
@@ -73,9 +75,9 @@ public final class Agreement {
             for (var ms : x.members().entrySet()) {
                 Member mem = model.member(ms.getKey());
                 double len = model.lengthM(mem), e = model.materialOf(mem).ePa();
-                double axial = Math.abs(ms.getValue().peaks().value("N_abs")) * len / (e * model.sectionOf(mem).areaM2());
+                double axial = Math.abs(ms.getValue().peaks().value(Quantity.N_ABS)) * len / (e * model.sectionOf(mem).areaM2());
                 double ei = e * model.sectionOf(mem).inertiaM4();
-                double bending = Double.isFinite(ei) && ei > 0 ? ms.getValue().peaks().value("M_abs") * len * len / ei : 0;
+                double bending = Double.isFinite(ei) && ei > 0 ? ms.getValue().peaks().value(Quantity.M_ABS) * len * len / ei : 0;
                 scale[2] = Math.max(scale[2], axial + bending);
             }
         }
@@ -100,9 +102,9 @@ public final class Agreement {
                 double[] f = m.getValue().endForcesLocal(), g = t.members().get(m.getKey()).endForcesLocal();
                 for (int k = 0; k < 6; k++) worst = Math.max(worst, rel(f[k], g[k], k % 3 == 2 ? scale[1] : scale[0]));
                 Peaks p = m.getValue().peaks(), q = t.members().get(m.getKey()).peaks();
-                for (String k : new String[]{"N_max", "N_min", "V_max", "V_min"}) worst = Math.max(worst, rel(p.value(k), q.value(k), scale[0]));
-                for (String k : new String[]{"M_max", "M_min"}) worst = Math.max(worst, rel(p.value(k), q.value(k), scale[1]));
-                worst = Math.max(worst, rel(p.value("deflection"), q.value("deflection"), scale[2]));
+                for (Quantity k : new Quantity[]{Quantity.N_MAX, Quantity.N_MIN, Quantity.V_MAX, Quantity.V_MIN}) worst = Math.max(worst, rel(p.value(k), q.value(k), scale[0]));
+                for (Quantity k : new Quantity[]{Quantity.M_MAX, Quantity.M_MIN}) worst = Math.max(worst, rel(p.value(k), q.value(k), scale[1]));
+                worst = Math.max(worst, rel(p.value(Quantity.DEFLECTION), q.value(Quantity.DEFLECTION), scale[2]));
             }
         }
         return worst;

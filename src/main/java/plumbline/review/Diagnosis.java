@@ -11,6 +11,7 @@ import plumbline.model.Claim;
 import plumbline.model.LoadCase;
 import plumbline.model.MemberLoad;
 import plumbline.model.Model;
+import plumbline.model.Quantity;
 import plumbline.model.Support;
 import plumbline.solve.Engine;
 import plumbline.units.Dimension;
@@ -101,14 +102,12 @@ final class Diagnosis {
                         + "(reactions here are forces on the structure; M is positive sagging)", what, fmt(shownComputed), unitShown)));
         LoadSetResult here = a.solutions().get(engine).get(c.combo());
         // swapped components or quantities
-        List<String> others = c.item() == Claim.Kind.REACTION ? List.of("Fx", "Fy", "Mz")
-                : c.item() == Claim.Kind.DISPLACEMENT ? List.of("ux", "uy", "rz")
-                : List.of("N_max", "N_min", "V_max", "V_min", "M_max", "M_min", "deflection");
         if (here != null) {
-            for (String q : others) {
-                if (q.equals(c.quantity())) continue;
+            for (Quantity q : Quantity.of(c.item())) {
+                // another quantity of the same dimension (abs peaks only restate max and min)
+                if (q == c.quantity() || !q.dimension.equals(c.dimension())) continue;
+                if (q.extreme == Quantity.Extreme.ABS && q != Quantity.DEFLECTION) continue;
                 Claim alt = with(c, c.name(), q, c.combo());
-                if (!Claim.dimensionOf(c.item(), q).equals(c.dimension())) continue;
                 double v = Review.of(here, alt).value();
                 hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s matches the computed %s of the same %s (%s %s): "
                         + "components or quantities swapped", what, q, c.item() == Claim.Kind.MEMBER ? "member" : "node",
@@ -241,8 +240,8 @@ final class Diagnosis {
                 x.loadCases().stream().map(f).toList(), x.combinations(), x.standardCombinations(), x.redundants(), List.of());
     }
 
-    private static Claim with(Claim c, String name, String quantity, String combo) {
-        return new Claim(c.item(), name, combo, quantity, c.valueInternal(), c.dimension(), c.writtenValue(), c.writtenUnit(),
+    private static Claim with(Claim c, String name, Quantity quantity, String combo) {
+        return new Claim(c.item(), name, combo, quantity, c.valueInternal(), c.writtenValue(), c.writtenUnit(),
                 c.toleranceOverride(), c.at());
     }
 

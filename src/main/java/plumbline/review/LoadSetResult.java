@@ -1,5 +1,7 @@
 package plumbline.review;
 
+import plumbline.model.Quantity;
+
 import java.util.ArrayList;
 import java.util.List;
 import plumbline.solve.Envelope;
@@ -27,7 +29,7 @@ public sealed interface LoadSetResult {
 
     double displacement(String node, int component, boolean upper);
 
-    Peak peak(String member, String quantity);
+    Peak peak(String member, Quantity quantity);
 
     /** The worst equilibrium residual of the states the set is made of (NaN, if any, is the worst). */
     default double equilibriumResidual() {
@@ -62,7 +64,7 @@ public sealed interface LoadSetResult {
             return solution.displacements().get(node)[component];
         }
 
-        public Peak peak(String member, String quantity) {
+        public Peak peak(String member, Quantity quantity) {
             MemberSolution m = solution.members().get(member);
             return new Peak(m.peaks().value(quantity), m.peaks().position(quantity), List.of());
         }
@@ -111,22 +113,19 @@ public sealed interface LoadSetResult {
             return r == null ? 0.0 : r[c];
         }
 
-        public Peak peak(String member, String quantity) {
-            if (quantity.equals("deflection")) {
-                Envelope.Extreme hi = Envelope.max(fixed.members().get(member).response().deflection(), functions(member, "v"));
-                Envelope.Extreme lo = Envelope.min(fixed.members().get(member).response().deflection(), functions(member, "v"));
-                return Math.abs(lo.value()) > Math.abs(hi.value()) ? peak(new Envelope.Extreme(-lo.value(), lo.xM(), lo.partsOn()))
-                        : peak(hi);
-            }
-            String f = quantity.substring(0, 1);
-            Piecewise base = function(fixed.members().get(member).response(), f);
-            List<Piecewise> ps = functions(member, f);
+        public Peak peak(String member, Quantity quantity) {
+            MemberResponse fixedPart = fixed.members().get(member).response();
+            Piecewise base = function(fixedPart, quantity.function);
+            List<Piecewise> ps = functions(member, quantity.function);
             Envelope.Extreme hi = Envelope.max(base, ps), lo = Envelope.min(base, ps);
-            if (quantity.endsWith("_max")) return peak(hi);
-            if (quantity.endsWith("_min")) return peak(lo);
-            return Math.abs(lo.value()) > Math.abs(hi.value())
-                    ? peak(new Envelope.Extreme(Math.abs(lo.value()), lo.xM(), lo.partsOn()))
-                    : peak(new Envelope.Extreme(Math.abs(hi.value()), hi.xM(), hi.partsOn()));
+            return switch (quantity.extreme) {
+                case MAX -> peak(hi);
+                case MIN -> peak(lo);
+                // the larger magnitude (the deflection is always one), reported as a magnitude
+                case ABS -> Math.abs(lo.value()) > Math.abs(hi.value())
+                        ? peak(new Envelope.Extreme(Math.abs(lo.value()), lo.xM(), lo.partsOn()))
+                        : peak(new Envelope.Extreme(Math.abs(hi.value()), hi.xM(), hi.partsOn()));
+            };
         }
 
         private Peak peak(Envelope.Extreme e) {
@@ -135,18 +134,18 @@ public sealed interface LoadSetResult {
             return new Peak(e.value(), e.xM(), on);
         }
 
-        private List<Piecewise> functions(String member, String f) {
+        private List<Piecewise> functions(String member, Quantity.Function f) {
             List<Piecewise> out = new ArrayList<>();
             for (Part p : parts) out.add(function(p.solution().members().get(member).response(), f));
             return out;
         }
 
-        private static Piecewise function(MemberResponse r, String f) {
+        private static Piecewise function(MemberResponse r, Quantity.Function f) {
             return switch (f) {
-                case "N" -> r.axial();
-                case "V" -> r.shear();
-                case "M" -> r.moment();
-                default -> r.deflection();
+                case N -> r.axial();
+                case V -> r.shear();
+                case M -> r.moment();
+                case DEFLECTION -> r.deflection();
             };
         }
 

@@ -1,5 +1,7 @@
 package plumbline.review;
 
+import plumbline.model.Quantity;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -127,7 +129,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 LoadSetResult r = a.solutions().get(primary).get(set.name());
                 for (String mem : a.model().members().keySet()) {
                     double span = a.model().lengthM(a.model().member(mem));
-                    double d = r.peak(mem, "deflection").value();
+                    double d = r.peak(mem, Quantity.DEFLECTION).value();
                     if (d > span / SPAN_OVER_DEFLECTION_MIN) {
                         warnings.add(new Plausibility.Warning("deflections beyond span/50 are not credible for a linear model "
                                 + "(common practice)", "member " + mem + ", " + set.name(),
@@ -143,8 +145,6 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
     record Value(double value, String governing, java.util.List<String> loaded) {
     }
 
-    static final String[] REACTIONS = {"Fx", "Fy", "Mz"};
-    static final String[] DISPLACEMENTS = {"ux", "uy", "rz"};
 
     /**
      * The computed value of the claimed quantity (SI). Under pattern loading a reaction or
@@ -161,8 +161,8 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
             Value v = of(sols.get(s.name()), c);
             boolean better;
             if (best == null) better = true;
-            else if (c.quantity().endsWith("_max")) better = v.value > best.value;
-            else if (c.quantity().endsWith("_min")) better = v.value < best.value;
+            else if (c.quantity().extreme == Quantity.Extreme.MAX) better = v.value > best.value;
+            else if (c.quantity().extreme == Quantity.Extreme.MIN) better = v.value < best.value;
             else if (c.item() != Claim.Kind.MEMBER) better = c.valueInternal() >= 0 ? v.value > best.value : v.value < best.value;
             else better = Math.abs(v.value) > Math.abs(best.value);
             if (better) best = v;
@@ -174,10 +174,10 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         boolean upper = c.valueInternal() >= 0;
         switch (c.item()) {
             case REACTION:
-                return new Value(s.reaction(c.name(), java.util.Arrays.asList(REACTIONS).indexOf(c.quantity()), upper), s.name(),
+                return new Value(s.reaction(c.name(), c.quantity().component, upper), s.name(),
                         java.util.List.of());
             case DISPLACEMENT:
-                return new Value(s.displacement(c.name(), java.util.Arrays.asList(DISPLACEMENTS).indexOf(c.quantity()), upper),
+                return new Value(s.displacement(c.name(), c.quantity().component, upper),
                         s.name(), java.util.List.of());
             default: {
                 LoadSetResult.Peak p = s.peak(c.name(), c.quantity());
@@ -195,20 +195,16 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         switch (c.item()) {
             case REACTION:
                 for (double[] x : s.reactions().values()) {
-                    max = c.quantity().equals("Mz") ? Math.max(max, Math.abs(x[2])) : Math.max(max, Math.hypot(x[0], x[1]));
+                    max = c.quantity() == Quantity.MZ ? Math.max(max, Math.abs(x[2])) : Math.max(max, Math.hypot(x[0], x[1]));
                 }
                 return max;
             case DISPLACEMENT:
                 for (double[] d : s.displacements().values()) {
-                    max = c.quantity().equals("rz") ? Math.max(max, Math.abs(d[2])) : Math.max(max, Math.hypot(d[0], d[1]));
+                    max = c.quantity() == Quantity.RZ ? Math.max(max, Math.abs(d[2])) : Math.max(max, Math.hypot(d[0], d[1]));
                 }
                 return max;
             default:
-                for (MemberSolution m : s.members().values()) {
-                    String q = c.quantity();
-                    String abs = q.equals("deflection") ? "deflection" : q.charAt(0) + "_abs";
-                    max = Math.max(max, m.peaks().value(abs));
-                }
+                for (MemberSolution m : s.members().values()) max = Math.max(max, m.peaks().value(c.quantity().magnitude()));
                 return max;
         }
     }

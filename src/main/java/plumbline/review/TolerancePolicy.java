@@ -42,7 +42,7 @@ public record TolerancePolicy(double commandLine) {
     static String kindKey(Claim c) {
         if (c.item() == Claim.Kind.REACTION) return "reaction";
         if (c.item() == Claim.Kind.DISPLACEMENT) return "displacement";
-        return c.quantity().equals("deflection") ? "deflection" : "member";
+        return c.quantity() == plumbline.model.Quantity.DEFLECTION ? "deflection" : "member";
     }
 
     public Applied forClaim(Claim c, ClaimSet file) {

@@ -10,6 +10,7 @@ import plumbline.model.Combination;
 import plumbline.model.LoadCase;
 import plumbline.model.Model;
 import plumbline.model.Node;
+import plumbline.model.Quantity;
 import plumbline.model.Support;
 
 /**
@@ -28,7 +29,7 @@ public record ClaimedEquilibrium(String combo, String referenceNode, double sumF
 
     /** Checks every combination or load case named by some reaction claim. */
     public static List<ClaimedEquilibrium> check(Model model, Map<String, Map<String, Double>> combos, double tolerance) {
-        Map<String, Map<String, Map<String, Double>>> claimed = new LinkedHashMap<>(); // combo -> node -> comp -> value
+        Map<String, Map<String, Map<Quantity, Double>>> claimed = new LinkedHashMap<>(); // combo -> node -> component -> value
         for (ClaimSet cs : model.claims()) {
             for (Claim c : cs.claims()) {
                 if (c.item() != Claim.Kind.REACTION) continue;
@@ -60,19 +61,19 @@ public record ClaimedEquilibrium(String combo, String referenceNode, double sumF
             List<String> missing = new ArrayList<>();
             double claimedMag = 0;
             for (Support s : model.supports().values()) {
-                Map<String, Double> r = e.getValue().getOrDefault(s.node(), Map.of());
+                Map<Quantity, Double> r = e.getValue().getOrDefault(s.node(), Map.of());
                 Node n = model.node(s.node());
                 boolean[] can = globalComponents(s);
-                String[] names = {"Fx", "Fy", "Mz"};
+                Quantity[] components = {Quantity.FX, Quantity.FY, Quantity.MZ};
                 for (int d = 0; d < 3; d++) {
-                    if (can[d] && !r.containsKey(names[d])) {
-                        missing.add(s.node() + "." + names[d]);
+                    if (can[d] && !r.containsKey(components[d])) {
+                        missing.add(s.node() + "." + components[d].symbol);
                         if (d == 0) okX = false;
                         if (d == 1) okY = false;
                         okM = false;
                     }
                 }
-                double fx = r.getOrDefault("Fx", 0.0), fy = r.getOrDefault("Fy", 0.0), mz = r.getOrDefault("Mz", 0.0);
+                double fx = r.getOrDefault(Quantity.FX, 0.0), fy = r.getOrDefault(Quantity.FY, 0.0), mz = r.getOrDefault(Quantity.MZ, 0.0);
                 sx += fx;
                 sy += fy;
                 sm += (n.xM() - ref.xM()) * fy - (n.yM() - ref.yM()) * fx + mz;

@@ -56,7 +56,7 @@ class ClaimComparisonTest {
                 """);
         for (ClaimResult c : r.claims()) assertEquals(ClaimResult.Status.OK, c.status(), c.claim().id() + " computed " + c.computed());
         for (ClaimResult c : r.claims()) {
-            String expected = c.claim().quantity().equals("M_min") || c.claim().valueInternal() == -6e3
+            String expected = c.claim().quantity() == plumbline.model.Quantity.M_MIN || c.claim().valueInternal() == -6e3
                     || c.claim().valueInternal() == 9.0e-4 ? "C3" : "C1";
             assertEquals(expected, c.governing(), c.claim().id());
         }

@@ -1,5 +1,7 @@
 package plumbline.review;
 
+import plumbline.model.Quantity;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertSame;
@@ -47,23 +49,23 @@ class PatternEnvelopeTest {
             LoadSetResult r = analysis(engine).solutions().get(engine.name()).get("L");
             assertTrue(r.patterned());
             String e = engine.name() + ": ";
-            LoadSetResult.Peak sag = r.peak("S1", "M_max");
+            LoadSetResult.Peak sag = r.peak("S1", Quantity.M_MAX);
             assertEquals(36.45e3, sag.value(), 1e-6, e + "M_max");
             assertEquals(2.7, sag.xM(), 1e-9, e + "at 0.45 L");
             assertEquals(List.of("S1", "S3"), sag.loadedMembers(), e);
-            LoadSetResult.Peak hog = r.peak("S1", "M_min");
+            LoadSetResult.Peak hog = r.peak("S1", Quantity.M_MIN);
             assertEquals(-42e3, hog.value(), 1e-6, e + "M_min");
             assertEquals(6, hog.xM(), 1e-9);
             assertEquals(List.of("S1", "S2"), hog.loadedMembers(), e);
-            LoadSetResult.Peak abs = r.peak("S1", "M_abs");
+            LoadSetResult.Peak abs = r.peak("S1", Quantity.M_ABS);
             assertEquals(42e3, abs.value(), 1e-6, e + "M_abs is the larger magnitude");
             assertEquals(6, abs.xM(), 1e-9);
             assertEquals(List.of("S1", "S2"), abs.loadedMembers());
-            assertEquals(27e3, r.peak("S1", "V_max").value(), 1e-6, e + "V_max");
-            assertEquals(0, r.peak("S1", "V_max").xM(), 1e-9);
-            assertEquals(-37e3, r.peak("S1", "V_min").value(), 1e-6, e + "V_min");
-            assertEquals(37e3, r.peak("S1", "V_abs").value(), 1e-6, e + "V_abs");
-            assertEquals(0, r.peak("S1", "N_max").value(), 1e-6, "no axial load");
+            assertEquals(27e3, r.peak("S1", Quantity.V_MAX).value(), 1e-6, e + "V_max");
+            assertEquals(0, r.peak("S1", Quantity.V_MAX).xM(), 1e-9);
+            assertEquals(-37e3, r.peak("S1", Quantity.V_MIN).value(), 1e-6, e + "V_min");
+            assertEquals(37e3, r.peak("S1", Quantity.V_ABS).value(), 1e-6, e + "V_abs");
+            assertEquals(0, r.peak("S1", Quantity.N_MAX).value(), 1e-6, "no axial load");
             assertEquals(27e3, r.reaction("A", 1, true), 1e-6, e + "upper reaction at A");
             assertEquals(-3e3, r.reaction("A", 1, false), 1e-6, e + "lower reaction at A");
             assertEquals(0, r.reaction("A", 0, true), 1e-6);
@@ -75,7 +77,7 @@ class PatternEnvelopeTest {
     void theDeflectionEnvelopeIsTheLargestMagnitudeWithItsSign() {
         // end span with spans 1 and 3 loaded deflects down most; the result is a magnitude, never negative
         LoadSetResult r = analysis(new StiffnessEngine()).solutions().get("stiffness").get("L");
-        LoadSetResult.Peak d = r.peak("S1", "deflection");
+        LoadSetResult.Peak d = r.peak("S1", Quantity.DEFLECTION);
         assertTrue(d.value() > 0, "deflection is a magnitude: " + d.value());
         assertEquals(List.of("S1", "S3"), d.loadedMembers());
         // upward displacement of span 1 with the middle span alone loaded is smaller than the downward one

@@ -1,5 +1,7 @@
 package plumbline.solve;
 
+import plumbline.model.Quantity;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.ArrayList;
@@ -160,7 +162,8 @@ class MetamorphicTest {
         }
         for (var e : base.members().entrySet()) {
             Peaks p = e.getValue().peaks(), q = rot.members().get(e.getKey()).peaks();
-            for (String k : new String[]{"N_max", "N_min", "V_max", "V_min", "M_max", "M_min", "deflection"}) {
+            for (Quantity k : new Quantity[]{Quantity.N_MAX, Quantity.N_MIN, Quantity.V_MAX, Quantity.V_MIN, Quantity.M_MAX,
+                    Quantity.M_MIN, Quantity.DEFLECTION}) {
                 close(p.value(k), q.value(k), sc * 10, "rotated " + e.getKey() + " " + k);
             }
         }
@@ -174,9 +177,9 @@ class MetamorphicTest {
         }
         for (var e : base.members().entrySet()) {
             Peaks p = e.getValue().peaks(), q = mir.members().get(e.getKey()).peaks();
-            close(p.value("N_max"), q.value("N_max"), sc, "mirror N");
-            close(p.value("M_abs"), q.value("M_abs"), sc * 10, "mirror |M|");
-            close(p.value("deflection"), q.value("deflection"), sc, "mirror deflection");
+            close(p.value(Quantity.N_MAX), q.value(Quantity.N_MAX), sc, "mirror N");
+            close(p.value(Quantity.M_ABS), q.value(Quantity.M_ABS), sc * 10, "mirror |M|");
+            close(p.value(Quantity.DEFLECTION), q.value(Quantity.DEFLECTION), sc, "mirror deflection");
         }
         // renaming and reordering members
         int n = s.members().size();
@@ -186,8 +189,8 @@ class MetamorphicTest {
         Solution ren = solve(engine, yaml(s, 0, 0, 0, false, false, 1.0, perm.stream().mapToInt(Integer::intValue).toArray()));
         for (int k = 0; k < n; k++) {
             Peaks p = base.members().get("M" + k).peaks(), q = ren.members().get("R" + (n - k)).peaks();
-            close(p.value("M_max"), q.value("M_max"), sc * 10, "renamed M_max");
-            close(p.value("V_min"), q.value("V_min"), sc, "renamed V_min");
+            close(p.value(Quantity.M_MAX), q.value(Quantity.M_MAX), sc * 10, "renamed M_max");
+            close(p.value(Quantity.V_MIN), q.value(Quantity.V_MIN), sc, "renamed V_min");
         }
         // linearity
         Solution twice = solve(engine, yaml(s, 0, 0, 0, false, false, 2.5, null));
@@ -230,9 +233,9 @@ class MetamorphicTest {
         double sc = scaleOf(a);
         for (var e : a.reactions().entrySet()) for (int k = 0; k < 3; k++) close(e.getValue()[k], b.reactions().get(e.getKey())[k], sc * 10, "split reactions");
         Peaks p1 = a.members().get("M1").peaks(), pa = b.members().get("M1a").peaks(), pb = b.members().get("M1b").peaks();
-        close(p1.value("M_max"), Math.max(pa.value("M_max"), pb.value("M_max")), sc * 10, "split M_max");
-        close(p1.value("M_min"), Math.min(pa.value("M_min"), pb.value("M_min")), sc * 10, "split M_min");
-        close(p1.value("deflection"), Math.max(pa.value("deflection"), pb.value("deflection")), 1e-3, "split deflection");
+        close(p1.value(Quantity.M_MAX), Math.max(pa.value(Quantity.M_MAX), pb.value(Quantity.M_MAX)), sc * 10, "split M_max");
+        close(p1.value(Quantity.M_MIN), Math.min(pa.value(Quantity.M_MIN), pb.value(Quantity.M_MIN)), sc * 10, "split M_min");
+        close(p1.value(Quantity.DEFLECTION), Math.max(pa.value(Quantity.DEFLECTION), pb.value(Quantity.DEFLECTION)), 1e-3, "split deflection");
     }
 
     @RepeatedTest(10)

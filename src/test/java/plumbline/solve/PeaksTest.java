@@ -1,5 +1,7 @@
 package plumbline.solve;
 
+import plumbline.model.Quantity;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -17,21 +19,22 @@ class PeaksTest {
     @Test
     void absPeaksTakeTheLargerMagnitudeAndItsPlace() {
         Peaks p = new Peaks(e(3, 0.1), e(-5, 0.2), e(7, 0.3), e(-2, 0.4), e(-1, 0.5), e(-9, 0.6), e(0.01, 0.7));
-        Map<String, double[]> expected = Map.of("N_max", new double[]{3, 0.1}, "N_min", new double[]{-5, 0.2},
-                "N_abs", new double[]{5, 0.2}, "V_max", new double[]{7, 0.3}, "V_min", new double[]{-2, 0.4},
-                "V_abs", new double[]{7, 0.3}, "M_max", new double[]{-1, 0.5}, "M_min", new double[]{-9, 0.6},
-                "M_abs", new double[]{9, 0.6}, "deflection", new double[]{0.01, 0.7});
+        Map<Quantity, double[]> expected = Map.of(Quantity.N_MAX, new double[]{3, 0.1}, Quantity.N_MIN, new double[]{-5, 0.2},
+                Quantity.N_ABS, new double[]{5, 0.2}, Quantity.V_MAX, new double[]{7, 0.3}, Quantity.V_MIN, new double[]{-2, 0.4},
+                Quantity.V_ABS, new double[]{7, 0.3}, Quantity.M_MAX, new double[]{-1, 0.5}, Quantity.M_MIN, new double[]{-9, 0.6},
+                Quantity.M_ABS, new double[]{9, 0.6}, Quantity.DEFLECTION, new double[]{0.01, 0.7});
         expected.forEach((k, v) -> {
-            assertEquals(v[0], p.value(k), 0.0, k);
+            assertEquals(v[0], p.value(k), 0.0, k.symbol);
             assertEquals(v[1], p.position(k), 0.0, k + " position");
         });
         // equal magnitudes: the max's place
         Peaks tie = new Peaks(e(4, 1), e(-4, 2), e(6, 3), e(-6, 4), e(8, 5), e(-8, 6), e(0, 7));
-        assertEquals(1, tie.position("N_abs"), 0.0);
-        assertEquals(3, tie.position("V_abs"), 0.0);
-        assertEquals(5, tie.position("M_abs"), 0.0);
-        assertThrows(IllegalArgumentException.class, () -> p.value("Q_max"));
-        assertThrows(IllegalArgumentException.class, () -> p.position("Q_max"));
+        assertEquals(1, tie.position(Quantity.N_ABS), 0.0);
+        assertEquals(3, tie.position(Quantity.V_ABS), 0.0);
+        assertEquals(5, tie.position(Quantity.M_ABS), 0.0);
+        // a reaction or a displacement is not a member peak
+        assertThrows(IllegalArgumentException.class, () -> p.value(Quantity.FY));
+        assertThrows(IllegalArgumentException.class, () -> p.position(Quantity.UX));
     }
 
     @Test

@@ -1,5 +1,7 @@
 package plumbline.solve;
 
+import plumbline.model.Quantity;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -68,8 +70,8 @@ class SparseForceEngineTest extends EngineContract {
         assertTrue(dense.stable() && !dense.declined(), "the dense force method solves it");
         EngineResult stiffness = new plumbline.solve.stiffness.StiffnessEngine().solve(xBraced);
         for (String member : xBraced.members().keySet()) {
-            double f = dense.cases().get("H").members().get(member).peaks().value("N_max");
-            double k = stiffness.cases().get("H").members().get(member).peaks().value("N_max");
+            double f = dense.cases().get("H").members().get(member).peaks().value(Quantity.N_MAX);
+            double k = stiffness.cases().get("H").members().get(member).peaks().value(Quantity.N_MAX);
             assertEquals(k, f, 1e-9 * 10e3, member + " N by the dense force and the stiffness method");
         }
     }

@@ -1,5 +1,7 @@
 package plumbline.solve;
 
+import plumbline.model.Quantity;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -76,7 +78,8 @@ class SuperpositionTest {
                 """ + loads("D", 1, 0, true, false) + loads("E", 0, 1, false, true) + loads("F", 1.5, -0.5, true, true));
     }
 
-    static final String[] PEAKS = {"N_max", "N_min", "V_max", "V_min", "M_max", "M_min", "deflection"};
+    static final Quantity[] PEAKS = {Quantity.N_MAX, Quantity.N_MIN, Quantity.V_MAX, Quantity.V_MIN, Quantity.M_MAX, Quantity.M_MIN,
+            Quantity.DEFLECTION};
 
     @Test
     void aCombinationEqualsItsLoadsSolvedTogether() {
@@ -105,9 +108,9 @@ class SuperpositionTest {
             for (String mem : m.members().keySet()) {
                 MemberSolution a = direct.members().get(mem), b = combined.members().get(mem);
                 for (int i = 0; i < 6; i++) assertEquals(a.endForcesLocal()[i], b.endForcesLocal()[i], 1e-9 * scale, mem + " end force " + i);
-                for (String q : PEAKS) {
+                for (Quantity q : PEAKS) {
                     double x = a.peaks().value(q);
-                    double tol = q.equals("deflection") ? 1e-9 * Math.max(1e-6, Math.abs(x)) : 1e-9 * scale;
+                    double tol = q == Quantity.DEFLECTION ? 1e-9 * Math.max(1e-6, Math.abs(x)) : 1e-9 * scale;
                     assertEquals(x, b.peaks().value(q), tol, engine.name() + " " + mem + " " + q);
                 }
             }

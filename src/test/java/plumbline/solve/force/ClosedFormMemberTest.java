@@ -1,5 +1,7 @@
 package plumbline.solve.force;
 
+import plumbline.model.Quantity;
+
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -21,7 +23,8 @@ import plumbline.solve.Piecewise;
  */
 class ClosedFormMemberTest {
 
-    static final String[] PEAKS = {"N_max", "N_min", "V_max", "V_min", "M_max", "M_min", "deflection"};
+    static final Quantity[] PEAKS = {Quantity.N_MAX, Quantity.N_MIN, Quantity.V_MAX, Quantity.V_MIN, Quantity.M_MAX, Quantity.M_MIN,
+            Quantity.DEFLECTION};
 
     @Test
     void simpleBeamUnderUniformLoadByHand() {
@@ -149,8 +152,8 @@ class ClosedFormMemberTest {
             ClosedFormMember own = ClosedFormMember.of(start, a);
             Peaks p = shared.peaks(), q = own.peaks(ei, a.thermalCurvaturePerM(), vs, ve);
             double force = 1e4 * (1 + a.points().size() + a.distributed().size()) * 10 * len;
-            for (String k : PEAKS) {
-                double scale = k.equals("deflection") ? Math.max(p.value(k), 1e-6) : force;
+            for (Quantity k : PEAKS) {
+                double scale = k == Quantity.DEFLECTION ? Math.max(p.value(k), 1e-6) : force;
                 assertEquals(p.value(k), q.value(k), 1e-9 * scale, "trial " + trial + " " + k + " of " + a);
             }
             // virtual-work integrals against the unit diagrams, by the shared exact integration

@@ -1,0 +1,84 @@
+package plumbline.model;
+
+import java.util.ArrayList;
+import java.util.List;
+import plumbline.units.Dimension;
+
+/**
+ * What a claim measures, with its dimension: a reaction component (on the structure, global
+ * axes), a member peak, or a node displacement. A member peak is taken along the whole member
+ * of one function (axial force N, shear V, moment M, or the deflection) and is its most positive
+ * value (max), its most negative (min) or its largest magnitude (abs); the deflection is always a
+ * magnitude. The symbol is what files, reports and the results JSON write.
+ */
+public enum Quantity {
+    FX("Fx", Claim.Kind.REACTION, Dimension.FORCE, null, null, 0),
+    FY("Fy", Claim.Kind.REACTION, Dimension.FORCE, null, null, 1),
+    MZ("Mz", Claim.Kind.REACTION, Dimension.MOMENT, null, null, 2),
+    N_MAX("N_max", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Extreme.MAX, -1),
+    N_MIN("N_min", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Extreme.MIN, -1),
+    N_ABS("N_abs", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Extreme.ABS, -1),
+    V_MAX("V_max", Claim.Kind.MEMBER, Dimension.FORCE, Function.V, Extreme.MAX, -1),
+    V_MIN("V_min", Claim.Kind.MEMBER, Dimension.FORCE, Function.V, Extreme.MIN, -1),
+    V_ABS("V_abs", Claim.Kind.MEMBER, Dimension.FORCE, Function.V, Extreme.ABS, -1),
+    M_MAX("M_max", Claim.Kind.MEMBER, Dimension.MOMENT, Function.M, Extreme.MAX, -1),
+    M_MIN("M_min", Claim.Kind.MEMBER, Dimension.MOMENT, Function.M, Extreme.MIN, -1),
+    M_ABS("M_abs", Claim.Kind.MEMBER, Dimension.MOMENT, Function.M, Extreme.ABS, -1),
+    DEFLECTION("deflection", Claim.Kind.MEMBER, Dimension.LENGTH, Function.DEFLECTION, Extreme.ABS, -1),
+    UX("ux", Claim.Kind.DISPLACEMENT, Dimension.LENGTH, null, null, 0),
+    UY("uy", Claim.Kind.DISPLACEMENT, Dimension.LENGTH, null, null, 1),
+    RZ("rz", Claim.Kind.DISPLACEMENT, Dimension.ANGLE, null, null, 2);
+
+    /** The function along a member a peak is taken of. */
+    public enum Function { N, V, M, DEFLECTION }
+
+    /** Which extreme of it: the most positive, the most negative, or the largest magnitude. */
+    public enum Extreme { MAX, MIN, ABS }
+
+    public final String symbol;
+    public final Claim.Kind item;
+    public final Dimension dimension;
+    /** For a member peak, the function and the extreme; null otherwise. */
+    public final Function function;
+    public final Extreme extreme;
+    /** For a reaction or a displacement, the component {x, y, rotation} = {0, 1, 2}; -1 for a peak. */
+    public final int component;
+
+    Quantity(String symbol, Claim.Kind item, Dimension dimension, Function function, Extreme extreme, int component) {
+        this.symbol = symbol;
+        this.item = item;
+        this.dimension = dimension;
+        this.function = function;
+        this.extreme = extreme;
+        this.component = component;
+    }
+
+    /** The quantities a claim of this kind may name, in the order of the format. */
+    public static List<Quantity> of(Claim.Kind item) {
+        List<Quantity> out = new ArrayList<>();
+        for (Quantity q : values()) if (q.item == item) out.add(q);
+        return out;
+    }
+
+    /** The quantity of this kind written {@code symbol}, or null when there is none. */
+    public static Quantity of(Claim.Kind item, String symbol) {
+        for (Quantity q : values()) if (q.item == item && q.symbol.equals(symbol)) return q;
+        return null;
+    }
+
+    /** The symbols of a kind's quantities, in order. */
+    public static List<String> symbols(Claim.Kind item) {
+        return of(item).stream().map(q -> q.symbol).toList();
+    }
+
+    /** The largest magnitude of the same function (M_abs for M_max); the deflection is its own. */
+    public Quantity magnitude() {
+        for (Quantity q : values()) if (q.function == function && q.extreme == Extreme.ABS && function != null) return q;
+        throw new IllegalStateException(symbol + " is not a member peak");
+    }
+
+    @Override
+    public String toString() {
+        return symbol;
+    }
+}
