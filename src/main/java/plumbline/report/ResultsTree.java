@@ -55,7 +55,10 @@ public final class ResultsTree {
         root.put("engine", engineShown);
         Map<String, Object> engines = new LinkedHashMap<>();
         a.engines().forEach((k, v) -> {
-            Map<String, Object> e = map("stable", v.stable(), "declined", v.declined(), "instability", v.instability(), "notes", v.notes());
+            // warnings are listed among the notes, each beginning "warning:" (the format's notes)
+            List<String> notes = new ArrayList<>(v.notes());
+            for (var w : v.warnings()) notes.add("warning: " + w.found());
+            Map<String, Object> e = map("stable", v.stable(), "declined", v.declined(), "instability", v.instability(), "notes", notes);
             if (v.working() != null) {
                 List<Object> rows = new ArrayList<>();
                 for (double[] row : v.working().flexibility()) {

@@ -118,11 +118,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         Verdict verdict = verdict(a.stable(), guards, out, eq.stream().allMatch(ClaimedEquilibrium::balanced));
         List<Plausibility.Warning> warnings = new ArrayList<>(Plausibility.check(a.model()));
         for (var e : a.engines().values()) {
-            for (String n : e.notes()) {
-                if (n.startsWith("warning:")) warnings.add(new Plausibility.Warning("a solution loses digits when the stiffness "
-                        + "matrix is nearly singular (condition estimate from the factorization)", e.engine() + " method",
-                        n.substring("warning:".length()).trim()));
-            }
+            for (var w : e.warnings()) warnings.add(new Plausibility.Warning(w.rule(), e.engine() + " method", w.found()));
         }
         if (primary != null) {
             for (LoadSet set : a.loadSets()) {

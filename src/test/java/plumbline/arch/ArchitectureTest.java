@@ -49,7 +49,7 @@ class ArchitectureTest {
      * force method writes its own (ClosedFormMember).
      */
     static final Map<String, Set<String>> SHARED_BY_ENGINE = Map.of(
-            "stiffness", Set.of("Engine", "EngineResult", "Equilibrium", "MemberActions", "MemberFunctions", "MemberLoading",
+            "stiffness", Set.of("Engine", "EngineResult", "EngineWarning", "Equilibrium", "MemberActions", "MemberFunctions", "MemberLoading",
                     "MemberSolution", "Solution"),
             "force", Set.of("Engine", "EngineResult", "Equilibrium", "ForceWorking", "MemberActions", "MemberFunctions",
                     "MemberLoading", "MemberSolution", "Peaks", "Piecewise", "Solution"));

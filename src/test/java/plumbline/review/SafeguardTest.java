@@ -179,7 +179,7 @@ class SafeguardTest {
                     s.reactions().forEach((n, v) -> reactions.put(n, new double[]{v[0] * factor, v[1] * factor, v[2] * factor}));
                     cases.put(k, new Solution(s.name(), s.displacements(), reactions, s.members(), s.equilibriumResidual()));
                 });
-                return new EngineResult(r.engine(), r.stable(), r.instability(), cases, r.notes(), r.declined(), r.working());
+                return new EngineResult(r.engine(), r.stable(), r.instability(), cases, r.notes(), r.warnings(), r.declined(), r.working());
             }
         };
     }

@@ -285,7 +285,7 @@ public final class ForceEngine implements Engine {
         }
         ForceWorking record = new ForceWorking(redundant.stream().map(j -> unk.get(j).label()).toList(),
                 r > 0 && r <= WORKING_SHOWN ? delta.getData() : new double[0][], deltaZeros, redundantValues);
-        return new EngineResult(name(), true, null, cases, notes, false, record);
+        return new EngineResult(name(), true, null, cases, notes, List.of(), false, record);
     }
 
     /**

@@ -17,6 +17,7 @@ import plumbline.model.Settlement;
 import plumbline.model.Support;
 import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
+import plumbline.solve.EngineWarning;
 import plumbline.solve.Equilibrium;
 import plumbline.solve.MemberActions;
 import plumbline.solve.MemberFunctions;
@@ -44,8 +45,9 @@ public final class StiffnessEngine implements Engine {
      * precision: the results are reported with a warning naming the place.
      */
     public static final double ILL_CONDITIONED = 1e-8;
-    /** Notes that begin with this word are warnings for the checker. */
-    public static final String ILL_CONDITIONED_NOTE = "warning:";
+    /** Why a nearly singular stiffness matrix matters to the checker. */
+    public static final String ILL_CONDITIONED_RULE = "a solution loses digits when the stiffness matrix is nearly singular "
+            + "(condition estimate from the factorization)";
 
     private final MemberLoading loading;
     private final MemberFunctions functions;
@@ -158,6 +160,7 @@ public final class StiffnessEngine implements Engine {
         }
 
         List<String> notes = new ArrayList<>();
+        List<EngineWarning> warnings = new ArrayList<>();
         notes.add("stiffness matrix: " + free + " free freedoms, " + k.storedEntries() + " stored entries (skyline, RCM order)");
         if (k.smallestPivotRatio() < ILL_CONDITIONED) {
             int at = k.smallestPivotAt();
@@ -166,14 +169,15 @@ public final class StiffnessEngine implements Engine {
             String node = where.isEmpty() ? "" : where.substring(0, where.indexOf(' '));
             List<String> at2 = new ArrayList<>();
             for (Member m : model.members().values()) if (m.from().equals(node) || m.to().equals(node)) at2.add(m.name());
-            notes.add(String.format(java.util.Locale.ROOT, "%s the stiffness matrix is nearly singular at %s (pivot ratio %.1e, "
-                    + "about %d digits lost): a near-mechanism or very unequal stiffnesses; members there: %s", ILL_CONDITIONED_NOTE,
-                    where, k.smallestPivotRatio(), (int) Math.round(-Math.log10(k.smallestPivotRatio())), String.join(", ", at2)));
+            warnings.add(new EngineWarning(ILL_CONDITIONED_RULE, String.format(java.util.Locale.ROOT, "the stiffness matrix is nearly "
+                    + "singular at %s (pivot ratio %.1e, about %d digits lost): a near-mechanism or very unequal stiffnesses; "
+                    + "members there: %s", where, k.smallestPivotRatio(), (int) Math.round(-Math.log10(k.smallestPivotRatio())),
+                    String.join(", ", at2))));
         }
         Map<String, Solution> cases = new LinkedHashMap<>();
         Factored kf = new Factored(model, nodes, index, dof, fixed, free, List.copyOf(elements), frameAngle, k, loading, functions);
         for (LoadCase c : model.loadCases()) cases.put(c.name(), kf.solve(c));
-        return new EngineResult(name(), true, null, cases, notes);
+        return new EngineResult(name(), true, null, cases, notes, warnings, false, null);
     }
 
     /**
