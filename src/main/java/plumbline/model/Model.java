@@ -53,6 +53,23 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
         return Math.hypot(b.xM() - a.xM(), b.yM() - a.yM());
     }
 
+    /** The member's unit vector from its start to its end, {cx, cy}: its local x axis in global axes. */
+    public double[] directionOf(Member m) {
+        Node a = node(m.from()), b = node(m.to());
+        double len = lengthM(m);
+        return new double[]{(b.xM() - a.xM()) / len, (b.yM() - a.yM()) / len};
+    }
+
+    /** Axial stiffness EA of a member (N). */
+    public double axialStiffnessN(Member m) {
+        return materialOf(m).ePa() * sectionOf(m).areaM2();
+    }
+
+    /** Bending stiffness EI of a member (N*m2); NaN when its section gives no I. */
+    public double bendingStiffnessNm2(Member m) {
+        return materialOf(m).ePa() * sectionOf(m).inertiaM4();
+    }
+
     /**
      * The largest distance across the model's nodes, at least 1e-9 m: the length that makes
      * moments commensurate with forces in residuals and rank tests.

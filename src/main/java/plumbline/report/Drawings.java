@@ -197,7 +197,7 @@ public final class Drawings {
         for (MemberLoad l : c.memberLoads()) {
             Member mem = m.member(l.member());
             Node a = m.node(mem.from()), b = m.node(mem.to());
-            double lm = m.lengthM(mem), ex = (b.xM() - a.xM()) / lm, ey = (b.yM() - a.yM()) / lm;
+            double lm = m.lengthM(mem), ex = m.directionOf(mem)[0], ey = m.directionOf(mem)[1];
             if (l instanceof MemberLoad.Distributed d) {
                 double[] dir = direction(d.dir(), ex, ey, Math.signum(d.w1NPerM() + d.w2NPerM()));
                 int n = Math.max(3, (int) Math.round((d.toM() - d.fromM()) * f.scale() / (sym * 1.4)));
@@ -304,7 +304,7 @@ public final class Drawings {
         for (Member mem : m.members().values()) {
             MemberSolution ms = s.members().get(mem.name());
             Node a = m.node(mem.from()), b = m.node(mem.to());
-            double lm = m.lengthM(mem), ex = (b.xM() - a.xM()) / lm, ey = (b.yM() - a.yM()) / lm;
+            double lm = m.lengthM(mem), ex = m.directionOf(mem)[0], ey = m.directionOf(mem)[1];
             Piecewise p = function(ms, kind);
             Path2D path = new Path2D.Double();
             double x0 = f.x(a.xM()), y0 = f.y(a.yM());
@@ -404,7 +404,7 @@ public final class Drawings {
     private static void labelPeaks(Graphics2D g, Model m, Frame f, Member mem, Piecewise p, double k, Kind kind,
                                    java.util.List<java.awt.geom.Rectangle2D> drawn) {
         Node a = m.node(mem.from()), b = m.node(mem.to());
-        double lm = m.lengthM(mem), ex = (b.xM() - a.xM()) / lm, ey = (b.yM() - a.yM()) / lm;
+        double lm = m.lengthM(mem), ex = m.directionOf(mem)[0], ey = m.directionOf(mem)[1];
         Piecewise.Extreme[] ext = {p.max(), p.min()};
         double shown = Double.NaN;
         for (Piecewise.Extreme e : ext) {

@@ -40,7 +40,7 @@ public final class Agreement {
     public static double maxRelativeDifference(Model model, Map<String, Solution> a, Map<String, Solution> b) {
         double worst = 0;
         double extent = model.extentM(), ea = 0;
-        for (Member m : model.members().values()) ea = Math.max(ea, model.materialOf(m).ePa() * model.sectionOf(m).areaM2());
+        for (Member m : model.members().values()) ea = Math.max(ea, model.axialStiffnessN(m));
         // force, moment, translation, rotation: the largest of each kind over every load set
         double[] scale = {ZERO_FRACTION * ea, ZERO_FRACTION * ea * extent, ZERO_FRACTION * extent, ZERO_FRACTION};
         for (Solution x : a.values()) {

@@ -100,7 +100,7 @@ public final class Equilibrium {
         // forces below 1e-5 of those that would strain the stiffest member by the
         // largest displacement over the model's extent are rounding, not imbalance.
         double ea = 0, u = 0;
-        for (Member m : model.members().values()) ea = Math.max(ea, model.materialOf(m).ePa() * model.sectionOf(m).areaM2());
+        for (Member m : model.members().values()) ea = Math.max(ea, model.axialStiffnessN(m));
         for (double[] d : s.displacements().values()) u = Math.max(u, Math.hypot(d[0], d[1]));
         scale = Math.max(scale, Math.max(1e-12 * ea, 1e-5 * ea * u / lc));
         for (double[] a : sum.values()) worst = Math.max(worst, magnitude(a, lc));

@@ -98,13 +98,6 @@ public record MemberActions(double lengthM, List<Linear> distributed, List<Point
         return new double[]{fx, fy, m};
     }
 
-    /** The member's unit vector {cx, cy}. */
-    public static double[] direction(Model model, Member m) {
-        Node a = model.node(m.from()), b = model.node(m.to());
-        double len = Math.hypot(b.xM() - a.xM(), b.yM() - a.yM());
-        return new double[]{(b.xM() - a.xM()) / len, (b.yM() - a.yM()) / len};
-    }
-
     /** The local actions of load case {@code c} on every member, keyed by member name (members with none are absent). */
     public static java.util.Map<String, MemberActions> of(Model model, LoadCase c) {
         java.util.Map<String, List<MemberLoad>> byMember = new java.util.HashMap<>();
@@ -124,7 +117,7 @@ public record MemberActions(double lengthM, List<Linear> distributed, List<Point
 
     static MemberActions of(Model model, Member m, List<MemberLoad> loads, List<Temperature> temps, boolean selfWeight) {
         double len = model.lengthM(m);
-        double[] d = direction(model, m);
+        double[] d = model.directionOf(m);
         double cx = d[0], cy = d[1];
         List<Linear> dist = new ArrayList<>();
         List<Point> pts = new ArrayList<>();

@@ -58,6 +58,6 @@ public final class Superposition {
 
     /** EI of a member in N*m2, NaN when its section gives no I. */
     public static double bendingStiffness(Model model, Member m) {
-        return model.materialOf(m).ePa() * model.sectionOf(m).inertiaM4();
+        return model.bendingStiffnessNm2(m);
     }
 }

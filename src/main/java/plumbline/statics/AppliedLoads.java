@@ -61,7 +61,7 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
             for (MemberLoad l : c.memberLoads()) {
                 Member m = model.member(l.member());
                 Node a = model.node(m.from()), b = model.node(m.to());
-                double len = model.lengthM(m), ex = (b.xM() - a.xM()) / len, ey = (b.yM() - a.yM()) / len;
+                double len = model.lengthM(m), ex = model.directionOf(m)[0], ey = model.directionOf(m)[1];
                 double[] r = out.computeIfAbsent(m.name(), x -> new double[4]);
                 if (l instanceof MemberLoad.Couple cp) {
                     r[2] += k * cp.momentNm();

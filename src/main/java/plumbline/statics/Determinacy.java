@@ -232,7 +232,7 @@ public final class Determinacy {
             Node a = model.node(m.from()), b = model.node(m.to());
             double[] ua = motion.get(a.name()), ub = motion.get(b.name());
             double len = model.lengthM(m);
-            double cx = (b.xM() - a.xM()) / len, cy = (b.yM() - a.yM()) / len;
+            double cx = model.directionOf(m)[0], cy = model.directionOf(m)[1];
             double theta = ((ub[1] - ua[1]) * cx - (ub[0] - ua[0]) * cy) / len;
             double ta = Math.hypot(ua[0], ua[1]), tb = Math.hypot(ub[0], ub[1]);
             if (ta < 1e-6 && tb < 1e-6) continue;

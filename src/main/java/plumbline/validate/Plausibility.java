@@ -88,13 +88,13 @@ public final class Plausibility {
             Member stiff = null, soft = null;
             for (Member mem : e.getValue()) {
                 if (mem.truss()) continue;
-                double ei = m.materialOf(mem).ePa() * m.sectionOf(mem).inertiaM4() / m.lengthM(mem);
-                if (stiff == null || ei > m.materialOf(stiff).ePa() * m.sectionOf(stiff).inertiaM4() / m.lengthM(stiff)) stiff = mem;
-                if (soft == null || ei < m.materialOf(soft).ePa() * m.sectionOf(soft).inertiaM4() / m.lengthM(soft)) soft = mem;
+                double ei = m.bendingStiffnessNm2(mem) / m.lengthM(mem);
+                if (stiff == null || ei > m.bendingStiffnessNm2(stiff) / m.lengthM(stiff)) stiff = mem;
+                if (soft == null || ei < m.bendingStiffnessNm2(soft) / m.lengthM(soft)) soft = mem;
             }
             if (stiff != null && soft != null && stiff != soft) {
-                double r = (m.materialOf(stiff).ePa() * m.sectionOf(stiff).inertiaM4() / m.lengthM(stiff))
-                        / (m.materialOf(soft).ePa() * m.sectionOf(soft).inertiaM4() / m.lengthM(soft));
+                double r = (m.bendingStiffnessNm2(stiff) / m.lengthM(stiff))
+                        / (m.bendingStiffnessNm2(soft) / m.lengthM(soft));
                 if (r > STIFFNESS_RATIO) {
                     out.add(new Warning("members meeting at a node rarely differ in EI/L by more than 1000 (common practice)",
                             "node " + e.getKey(), String.format(Locale.ROOT, "member %s is %.3g times as stiff (EI/L) as %s",

@@ -42,8 +42,8 @@ final class Flexibility {
         for (var e : byMember.entrySet()) {
             Member m = model.member(e.getKey());
             double len = model.lengthM(m);
-            double ea = model.materialOf(m).ePa() * model.sectionOf(m).areaM2();
-            double ei = model.materialOf(m).ePa() * model.sectionOf(m).inertiaM4();
+            double ea = model.axialStiffnessN(m);
+            double ei = model.bendingStiffnessNm2(m);
             int[] idx = e.getValue().stream().mapToInt(Integer::intValue).toArray();
             for (int a : idx) {
                 double[] row = new double[idx.length];
@@ -107,8 +107,8 @@ final class Flexibility {
             if (a == null) continue;
             Member m = model.member(u.owner());
             double len = a.lengthM();
-            double ea = model.materialOf(m).ePa() * model.sectionOf(m).areaM2();
-            double ei = model.materialOf(m).ePa() * model.sectionOf(m).inertiaM4();
+            double ea = model.axialStiffnessN(m);
+            double ei = model.bendingStiffnessNm2(m);
             double[] fp = released.get(u.owner());
             // the released member's own diagrams in closed form, integrated exactly against the unit diagrams
             ClosedFormMember r = ClosedFormMember.of(new double[]{fp[0], fp[1], fp[2]}, a);

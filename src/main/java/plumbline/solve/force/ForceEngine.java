@@ -328,7 +328,7 @@ public final class ForceEngine implements Engine {
     }
 
     private static void addToNodes(Model model, Member mem, double[] f, double[] p, Map<String, Integer> row) {
-        double[] dir = MemberActions.direction(model, mem);
+        double[] dir = model.directionOf(mem);
         double cx = dir[0], cy = dir[1];
         // the member pushes on its nodes with the opposite of the forces on its ends
         p[row.get(mem.from() + "/0")] -= f[0] * cx - f[1] * cy;
@@ -389,11 +389,11 @@ public final class ForceEngine implements Engine {
         }
         Map<String, MemberSolution> members = new LinkedHashMap<>();
         for (Member mem : model.members().values()) {
-            double[] dir = MemberActions.direction(model, mem);
+            double[] dir = model.directionOf(mem);
             double[] ui = disp.get(mem.from()), uj = disp.get(mem.to());
             double vi = -ui[0] * dir[1] + ui[1] * dir[0], vj = -uj[0] * dir[1] + uj[1] * dir[0];
             MemberActions a = actions.getOrDefault(mem.name(), MemberActions.none(model.lengthM(mem)));
-            double ei = model.materialOf(mem).ePa() * model.sectionOf(mem).inertiaM4();
+            double ei = model.bendingStiffnessNm2(mem);
             members.put(mem.name(), functions.solve(ends.get(mem.name()), a, ei, vi, vj));
         }
         Solution s = new Solution(c.name(), disp, reactions, members, 0);

@@ -298,10 +298,10 @@ public final class StiffnessEngine implements Engine {
         e.i = index.get(m.from());
         e.j = index.get(m.to());
         Node a = model.node(m.from()), b = model.node(m.to());
-        e.lengthM = Math.hypot(b.xM() - a.xM(), b.yM() - a.yM());
+        e.lengthM = model.lengthM(m);
         e.angle = Math.atan2(b.yM() - a.yM(), b.xM() - a.xM());
-        double ea = model.materialOf(m).ePa() * model.sectionOf(m).areaM2();
-        e.ei = model.materialOf(m).ePa() * model.sectionOf(m).inertiaM4();
+        double ea = model.axialStiffnessN(m);
+        e.ei = model.bendingStiffnessNm2(m);
         for (int d = 0; d < 3; d++) {
             e.dofs[d] = dof[e.i][d];
             e.dofs[d + 3] = dof[e.j][d];
