@@ -3,17 +3,19 @@ package plumbline.cli;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
+import java.time.LocalDate;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.Model.CommandSpec;
 import plumbline.bench.FrameGenerator;
 import plumbline.io.ModelReader;
 import plumbline.io.OutputFiles;
 import plumbline.model.Model;
+import plumbline.report.PdfReport;
 import plumbline.report.ResultsTree;
 import plumbline.review.Analysis;
 import plumbline.review.Review;
@@ -95,8 +97,8 @@ final class BenchCommand implements Callable<Integer> {
                 long t5 = System.nanoTime();
                 heap = Math.max(heap, peakHeap());
                 resetPeaks();
-                byte[] pdf = plumbline.report.PdfReport.render(rv, new ResultsTree.Inputs(List.of("bench.yaml"), List.of("unreadable")),
-                        null, List.of(), java.time.LocalDate.now());
+                byte[] pdf = PdfReport.render(rv, new ResultsTree.Inputs(List.of("bench.yaml"), List.of("unreadable")),
+                        null, List.of(), LocalDate.now());
                 long t6 = System.nanoTime();
                 if (pdf.length == 0) throw new IllegalStateException("no report");
                 if (!s.stable() || json.length == 0) throw new IllegalStateException("benchmark model did not solve");

@@ -14,8 +14,10 @@ import plumbline.model.ClaimSet;
 import plumbline.model.InputException;
 import plumbline.model.Model;
 import plumbline.model.Problem;
+import plumbline.model.SourceRef;
 import plumbline.review.Analysis;
 import plumbline.review.LoadSet;
+import plumbline.statics.EquilibriumMatrix;
 import plumbline.validate.ClaimCheck;
 import plumbline.validate.StructureCheck;
 
@@ -35,11 +37,11 @@ final class Inputs {
         List<Problem> problems = new ArrayList<>(StructureCheck.check(m));
         if (!problems.isEmpty()) throw new InputException(problems);
         if (!m.redundants().isEmpty()) {
-            List<String> labels = plumbline.statics.EquilibriumMatrix.of(m).unknowns().stream()
-                    .map(plumbline.statics.EquilibriumMatrix.Unknown::label).toList();
+            List<String> labels = EquilibriumMatrix.of(m).unknowns().stream()
+                    .map(EquilibriumMatrix.Unknown::label).toList();
             for (String r : m.redundants()) {
                 if (!labels.contains(r)) {
-                    problems.add(new Problem(plumbline.model.SourceRef.none(m.file()), "force_method.redundants",
+                    problems.add(new Problem(SourceRef.none(m.file()), "force_method.redundants",
                             "'" + r + "' is not an independent force of this model; expected one of " + String.join(", ", labels)));
                 }
             }

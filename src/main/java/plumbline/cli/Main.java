@@ -1,8 +1,9 @@
 package plumbline.cli;
 
 import java.io.PrintWriter;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine;
+import plumbline.report.ResultsTree;
 
 /**
  * Entry point. Exit codes (format reference, src/site/markdown/formats.md section 6): 0 every claim ok, 1 a claim marginal or
@@ -19,7 +20,7 @@ public final class Main implements Runnable {
     /** The version, from the one place it is written (the results' tool block). */
     static final class Version implements CommandLine.IVersionProvider {
         public String[] getVersion() {
-            return new String[]{"plumbline " + plumbline.report.ResultsTree.TOOL_VERSION};
+            return new String[]{"plumbline " + ResultsTree.TOOL_VERSION};
         }
     }
 

@@ -2,14 +2,19 @@ package plumbline.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import plumbline.io.OutputFiles;
 import plumbline.model.InputException;
 import plumbline.model.Problem;
+import plumbline.model.SourceRef;
 import plumbline.report.Console;
+import plumbline.report.Figures;
+import plumbline.report.PdfReport;
 import plumbline.report.ResultsTree;
 import plumbline.review.Analysis;
 import plumbline.review.Review;
@@ -54,8 +59,8 @@ final class Run {
             in = Inputs.load(o.model(), o.claims());
             if (json != null) OutputFiles.refuseInputs(json, in.files, "--json");
             if (pdf != null) OutputFiles.refuseInputs(pdf, in.files, "--pdf");
-            if (figures != null && !java.nio.file.Files.isDirectory(figures)) {
-                throw new InputException(new Problem(plumbline.model.SourceRef.none(figures.toString()), "--figures",
+            if (figures != null && !Files.isDirectory(figures)) {
+                throw new InputException(new Problem(SourceRef.none(figures.toString()), "--figures",
                         "is not an existing folder; expected a folder for the PNG files"));
             }
         } catch (InputException e) {
@@ -87,8 +92,8 @@ final class Run {
         byte[] report = null;
         if (pdf != null) {
             // rendered in full before anything is written, so a failure leaves no file behind
-            report = plumbline.report.PdfReport.render(r, new ResultsTree.Inputs(in.names(), in.sha256()), agreement, notes,
-                    java.time.LocalDate.now());
+            report = PdfReport.render(r, new ResultsTree.Inputs(in.names(), in.sha256()), agreement, notes,
+                    LocalDate.now());
         }
         if (json != null) {
             Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
@@ -105,7 +110,7 @@ final class Run {
         Map<String, byte[]> pictures = null;
         if (figures != null) {
             try {
-                pictures = plumbline.report.Figures.render(r, plumbline.report.PdfReport.governingSets(r));
+                pictures = Figures.render(r, PdfReport.governingSets(r));
             } catch (IOException e) {
                 err.println("plumbline: cannot draw the figures: " + e.getMessage());
                 return Main.INTERNAL;

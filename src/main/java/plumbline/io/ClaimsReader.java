@@ -207,9 +207,8 @@ public final class ClaimsReader {
                 List<String> qs = Quantity.symbols(kind);
                 Quantity quantity = Quantity.of(kind, q);
                 if (quantity == null) {
-                    String hint = Fields.closest(q, qs);
-                    problems.add(new Problem(at, "quantity", "unknown " + item + " quantity '" + q + "'"
-                            + (hint != null ? "; did you mean '" + hint + "'?" : "; expected one of " + String.join(", ", qs))));
+                problems.add(new Problem(at, "quantity", Fields.unknown(item + " quantity", q, qs,
+                        "expected one of " + String.join(", ", qs))));
                     continue;
                 }
                 if (combo.isEmpty() || name.isEmpty()) {
@@ -234,14 +233,14 @@ public final class ClaimsReader {
                     try {
                         Unit u = Units.parse(unitText);
                         if (!u.dimension().matchesIgnoringAngle(d)) {
-                            problems.add(new Problem(at, "unit", "unit '" + unitText + "' is " + u.dimension().describe()
+                problems.add(new Problem(at, "unit", "unit '" + unitText + "' is " + u.dimension().describe()
                                     + "; expected " + d.describe()));
                             continue;
                         }
                         si = u.toInternal(value);
                         unitShown = unitText;
                     } catch (UnitParseException e) {
-                        problems.add(new Problem(at, "unit", e.getMessage()));
+                problems.add(new Problem(at, "unit", e.getMessage()));
                         continue;
                     }
                 }

@@ -2,6 +2,7 @@ package plumbline.io;
 
 import java.util.ArrayList;
 import java.util.Collection;
+import java.util.Collections;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -53,17 +54,37 @@ final class Fields {
     private void checkKeys() {
         for (Tree.Entry e : map.entries().values()) {
             if (!allowed.contains(e.key())) {
-                String hint = closest(e.key(), allowed);
-                problems.add(new Problem(e.keyAt(), field(e.key()), "unknown key '" + e.key() + "'"
-                        + (hint != null ? "; did you mean '" + hint + "'?" : "; expected one of " + sorted(allowed))));
+                problems.add(new Problem(e.keyAt(), field(e.key()), unknown("key", e.key(), allowed,
+                        "expected one of " + sorted(allowed))));
             }
         }
     }
 
     static String sorted(Collection<String> names) {
         List<String> l = new ArrayList<>(names);
-        java.util.Collections.sort(l);
+        Collections.sort(l);
         return String.join(", ", l);
+    }
+
+    /**
+     * The message for a name that is not among {@code known}: "unknown {what} 'name'", then a
+     * "did you mean" for a close known name, else {@code otherwise} (what was expected).
+     */
+    static String unknown(String what, String name, Collection<String> known, String otherwise) {
+        String hint = closest(name, known);
+        return "unknown " + what + " '" + name + "'" + (hint != null ? "; did you mean '" + hint + "'?" : "; " + otherwise);
+    }
+
+    /** Each entry of a map of named parts; records a problem if {@code t} is not a map (or is missing but required). */
+    static List<Tree.Entry> named(Tree t, List<Problem> problems, String path, boolean required, SourceRef where,
+                                  String expected) {
+        if (t == null) {
+            if (required) problems.add(new Problem(where, path, "missing; expected " + expected));
+            return List.of();
+        }
+        if (t instanceof Tree.MapNode m) return new ArrayList<>(m.entries().values());
+        problems.add(new Problem(t.at(), path, "found " + t.describe() + "; expected " + expected));
+        return List.of();
     }
 
     /** The closest name within edit distance 2 (or a case-insensitive match), else null. */

@@ -1,5 +1,6 @@
 package plumbline.io;
 
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -20,7 +21,7 @@ sealed interface Tree {
 
     record MapNode(Map<String, Entry> entries, SourceRef at) implements Tree {
         public MapNode {
-            entries = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(entries));
+            entries = Collections.unmodifiableMap(new LinkedHashMap<>(entries));
         }
 
         public String describe() {

@@ -3,7 +3,9 @@ package plumbline.linalg;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * Reverse Cuthill-McKee ordering of the node graph (E. Cuthill and J. McKee, "Reducing the
@@ -63,7 +65,7 @@ public final class NodeOrdering {
     private static int peripheral(int s, List<List<Integer>> adj) {
         int far = s;
         for (int pass = 0; pass < 2; pass++) {
-            java.util.Map<Integer, Boolean> seen = new java.util.HashMap<>();
+            Map<Integer, Boolean> seen = new HashMap<>();
             ArrayDeque<Integer> q = new ArrayDeque<>();
             q.add(far);
             seen.put(far, true);

@@ -1,7 +1,12 @@
 package plumbline.model;
 
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import plumbline.units.UnitSystem;
 
 /**
@@ -15,11 +20,11 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
                     List<String> standardCombinations, List<String> redundants, List<ClaimSet> claims) {
 
     public Model {
-        materials = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(materials));
-        sections = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(sections));
-        nodes = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(nodes));
-        supports = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(supports));
-        members = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(members));
+        materials = Collections.unmodifiableMap(new LinkedHashMap<>(materials));
+        sections = Collections.unmodifiableMap(new LinkedHashMap<>(sections));
+        nodes = Collections.unmodifiableMap(new LinkedHashMap<>(nodes));
+        supports = Collections.unmodifiableMap(new LinkedHashMap<>(supports));
+        members = Collections.unmodifiableMap(new LinkedHashMap<>(members));
         loadCases = List.copyOf(loadCases);
         combinations = List.copyOf(combinations);
         standardCombinations = List.copyOf(standardCombinations);
@@ -91,8 +96,8 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
      * end is rigid (neither hinged nor truss) or a support restrains or springs rotation. At
      * any other node every member end turns freely, so its rotation is not a freedom.
      */
-    public java.util.Set<String> rotationalNodes() {
-        java.util.Set<String> out = new java.util.HashSet<>();
+    public Set<String> rotationalNodes() {
+        Set<String> out = new HashSet<>();
         for (Member m : members.values()) {
             if (!m.releasedStart()) out.add(m.from());
             if (!m.releasedEnd()) out.add(m.to());
@@ -102,7 +107,7 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
     }
 
     public Model withClaims(List<ClaimSet> more) {
-        List<ClaimSet> all = new java.util.ArrayList<>(claims);
+        List<ClaimSet> all = new ArrayList<>(claims);
         all.addAll(more);
         return new Model(file, job, units, materials, sections, nodes, supports, members, loadCases,
                 combinations, standardCombinations, redundants, all);

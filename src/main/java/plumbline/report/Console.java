@@ -1,17 +1,20 @@
 package plumbline.report;
 
-import plumbline.model.Quantity;
-
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import plumbline.model.Claim;
 import plumbline.model.Model;
+import plumbline.model.Quantity;
+import plumbline.review.Agreement;
 import plumbline.review.ClaimResult;
+import plumbline.review.LoadSetResult;
 import plumbline.review.Review;
 import plumbline.review.Verdict;
+import plumbline.solve.Equilibrium;
 import plumbline.statics.ClaimedEquilibrium;
 import plumbline.statics.Determinacy;
+import plumbline.units.Dimension;
 import plumbline.units.UnitSystem;
 
 /** The console summary of a check, lines of at most 80 characters. */
@@ -65,11 +68,11 @@ public final class Console {
         if (r.analysis().stable()) {
             var g = r.safeguards();
             sb.append(wrap(String.format(Locale.ROOT, "Solved by: %s; equilibrium residual at most %.1e of the load (limit %.0e)%s",
-                    engines, g.worstResidual(), plumbline.solve.Equilibrium.TOLERANCE,
+                    engines, g.worstResidual(), Equilibrium.TOLERANCE,
                     g.balanced() ? "" : ": OUT OF BALANCE in " + g.worstResidualAt()), "  "));
             if (g.agreement() != null) {
                 sb.append(wrap(String.format(Locale.ROOT, "Engines %s to %.1e (largest relative difference; limit %.0e)",
-                        g.enginesAgree() ? "agree" : "DISAGREE", g.agreement(), plumbline.review.Agreement.TOLERANCE), "  "));
+                        g.enginesAgree() ? "agree" : "DISAGREE", g.agreement(), Agreement.TOLERANCE), "  "));
             }
         }
         if (!r.equilibrium().isEmpty()) sb.append("Equilibrium of claimed reactions:\n");
@@ -78,10 +81,10 @@ public final class Console {
             if (!e.checkedFx() && !e.checkedFy() && !e.checkedMoment()) line += e.note();
             else {
                 line += (e.balanced() ? "balanced" : "OUT OF BALANCE");
-                if (e.checkedFx()) line += String.format(Locale.ROOT, "; sum Fx %s", fmt(u.fromInternal(e.sumFxN(), plumbline.units.Dimension.FORCE)));
-                if (e.checkedFy()) line += String.format(Locale.ROOT, ", sum Fy %s", fmt(u.fromInternal(e.sumFyN(), plumbline.units.Dimension.FORCE)));
+                if (e.checkedFx()) line += String.format(Locale.ROOT, "; sum Fx %s", fmt(u.fromInternal(e.sumFxN(), Dimension.FORCE)));
+                if (e.checkedFy()) line += String.format(Locale.ROOT, ", sum Fy %s", fmt(u.fromInternal(e.sumFyN(), Dimension.FORCE)));
                 if (e.checkedMoment()) line += String.format(Locale.ROOT, ", sum M about %s %s", e.referenceNode(),
-                        fmt(u.fromInternal(e.sumMomentNm(), plumbline.units.Dimension.MOMENT)));
+                        fmt(u.fromInternal(e.sumMomentNm(), Dimension.MOMENT)));
                 line += " " + u.force().symbol();
                 if (!e.note().isEmpty()) line += "; " + e.note();
             }
@@ -140,7 +143,7 @@ public final class Console {
         if (!a.stable() || a.primaryEngine() == null) return "";
         Model m = a.model();
         UnitSystem u = m.units();
-        String f = u.force().symbol(), mo = u.symbol(plumbline.units.Dimension.MOMENT), len = u.length().symbol();
+        String f = u.force().symbol(), mo = u.symbol(Dimension.MOMENT), len = u.length().symbol();
         StringBuilder sb = new StringBuilder();
         var sols = a.solutions().get(a.primaryEngine());
         int k = 0;
@@ -153,9 +156,9 @@ public final class Console {
             sb.append(wrap("Load set " + set.name() + (res.patterned() ? " (pattern envelope)" : "") + ": " + set.origin(), "    "));
             for (String node : m.supports().keySet()) {
                 String line = String.format(Locale.ROOT, "  reaction %-6s Fx %10s  Fy %10s  Mz %10s  (%s, %s)", node,
-                        fmt(u.fromInternal(res.reaction(node, 0, true), plumbline.units.Dimension.FORCE)),
-                        fmt(u.fromInternal(res.reaction(node, 1, true), plumbline.units.Dimension.FORCE)),
-                        fmt(u.fromInternal(res.reaction(node, 2, true), plumbline.units.Dimension.MOMENT)), f, mo);
+                        fmt(u.fromInternal(res.reaction(node, 0, true), Dimension.FORCE)),
+                        fmt(u.fromInternal(res.reaction(node, 1, true), Dimension.FORCE)),
+                        fmt(u.fromInternal(res.reaction(node, 2, true), Dimension.MOMENT)), f, mo);
                 sb.append(wrap(line, "    "));
             }
             if (m.members().size() <= MEMBERS_LISTED) {
@@ -181,15 +184,15 @@ public final class Console {
                     }
                 }
                 sb.append(wrap(String.format(Locale.ROOT, "  largest |M| %s %s in %s; largest deflection %s %s in %s",
-                        fmt(u.fromInternal(bm, plumbline.units.Dimension.MOMENT)), mo, worstM,
-                        fmt(u.fromInternal(bd, plumbline.units.Dimension.LENGTH)), len, worstD), "    "));
+                        fmt(u.fromInternal(bm, Dimension.MOMENT)), mo, worstM,
+                        fmt(u.fromInternal(bd, Dimension.LENGTH)), len, worstD), "    "));
             }
         }
         sb.append("  (N, V in " + f + "; M in " + mo + "; deflection in " + len + ")\n");
         return sb.toString();
     }
 
-    private static String peak(UnitSystem u, plumbline.review.LoadSetResult r, String member, Quantity q) {
+    private static String peak(UnitSystem u, LoadSetResult r, String member, Quantity q) {
         return fmt(u.fromInternal(r.peak(member, q).value(), q.dimension));
     }
 

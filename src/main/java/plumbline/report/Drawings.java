@@ -1,24 +1,29 @@
 package plumbline.report;
 
-import plumbline.model.Quantity;
-
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.geom.AffineTransform;
+import java.awt.geom.Arc2D;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
+import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import plumbline.model.LoadCase;
+import plumbline.model.LoadDirection;
 import plumbline.model.Member;
 import plumbline.model.MemberLoad;
 import plumbline.model.Model;
 import plumbline.model.Node;
 import plumbline.model.NodeLoad;
+import plumbline.model.Quantity;
 import plumbline.model.Support;
 import plumbline.solve.MemberSolution;
 import plumbline.solve.Piecewise;
@@ -141,7 +146,7 @@ public final class Drawings {
         g.setColor(SUPPORT);
         g.setStroke(new BasicStroke(1.2f));
         if (s.fixUx() && s.fixUy() && s.fixRz()) {
-            g.fill(new java.awt.geom.Rectangle2D.Double(-sym, 0, 2 * sym, sym * 0.35));
+            g.fill(new Rectangle2D.Double(-sym, 0, 2 * sym, sym * 0.35));
             for (int k = -3; k <= 3; k++) g.draw(new Line2D.Double(k * sym / 3, sym * 0.35, k * sym / 3 - sym / 3, sym * 0.8));
         } else if (s.fixUy() || s.fixUx()) {
             Path2D wedge = new Path2D.Double();
@@ -156,14 +161,14 @@ public final class Drawings {
                 base = sym * 1.4;
             }
             g.draw(new Line2D.Double(-sym, base, sym, base));
-            if (s.fixRz()) g.fill(new java.awt.geom.Rectangle2D.Double(-sym * 0.15, -sym * 0.15, sym * 0.3, sym * 0.3));
+            if (s.fixRz()) g.fill(new Rectangle2D.Double(-sym * 0.15, -sym * 0.15, sym * 0.3, sym * 0.3));
         }
         for (int d = 0; d < 3; d++) {
             if (s.spring(d) <= 0) continue;
             Path2D z = new Path2D.Double();
             double len = sym * 1.8;
             if (d == 2) {
-                g.draw(new java.awt.geom.Arc2D.Double(-sym * 0.7, -sym * 0.7, sym * 1.4, sym * 1.4, 200, 220, java.awt.geom.Arc2D.OPEN));
+                g.draw(new Arc2D.Double(-sym * 0.7, -sym * 0.7, sym * 1.4, sym * 1.4, 200, 220, Arc2D.OPEN));
                 continue;
             }
             double ux = d == 0 ? -1 : 0, uy = d == 0 ? 0 : 1;
@@ -233,7 +238,7 @@ public final class Drawings {
 
     private static void couple(Graphics2D g, double x, double y, double sym, boolean ccw) {
         double r = sym * 0.9;
-        g.draw(new java.awt.geom.Arc2D.Double(x - r, y - r, 2 * r, 2 * r, 30, 240, java.awt.geom.Arc2D.OPEN));
+        g.draw(new Arc2D.Double(x - r, y - r, 2 * r, 2 * r, 30, 240, Arc2D.OPEN));
         double endAng = Math.toRadians(ccw ? 270 : 30);
         double hx = x + r * Math.cos(endAng), hy = y - r * Math.sin(endAng);
         double tang = endAng + (ccw ? Math.PI / 2 : -Math.PI / 2);
@@ -241,7 +246,7 @@ public final class Drawings {
     }
 
     /** Direction (x right, y up) in which a load of the given sign acts. */
-    private static double[] direction(plumbline.model.LoadDirection dir, double ex, double ey, double sign) {
+    private static double[] direction(LoadDirection dir, double ex, double ey, double sign) {
         double s = sign == 0 ? 1 : sign;
         return switch (dir) {
             case X -> new double[]{s, 0};
@@ -295,7 +300,7 @@ public final class Drawings {
             peak = Math.max(peak, Math.max(Math.abs(p.max().value()), Math.abs(p.min().value())));
         }
         drawMembers(g, m, f, new BasicStroke(1.0f), new Color(0x90, 0xA4, 0xAE));
-        java.util.List<java.awt.geom.Rectangle2D> labels = new java.util.ArrayList<>();
+        List<Rectangle2D> labels = new ArrayList<>();
         double room = margin * 0.7;
         // moment is drawn on the tension face (positive towards local -y); axial and shear force
         // with positive values on the local +y side, as usually drawn
@@ -339,16 +344,16 @@ public final class Drawings {
                 String text = Math.abs(v) <= 1e-9 * peak ? "0" : Console.fmt(Math.abs(m.units().fromInternal(v, kind.dimension)))
                         + (compression ? " C" : " T");
                 double mx = (x0 + f.x(b.xM())) / 2, my = (y0 + f.y(b.yM())) / 2;
-                java.awt.FontMetrics fm = g.getFontMetrics();
+                FontMetrics fm = g.getFontMetrics();
                 float tw = fm.stringWidth(text);
                 g.setColor(Color.WHITE);
-                g.fill(new java.awt.geom.Rectangle2D.Double(mx - tw / 2 - 1, my - fm.getAscent() / 2.0 - 1, tw + 2, fm.getAscent() + 2));
+                g.fill(new Rectangle2D.Double(mx - tw / 2 - 1, my - fm.getAscent() / 2.0 - 1, tw + 2, fm.getAscent() + 2));
                 g.setColor(kind.color);
                 g.drawString(text, (float) (mx - tw / 2), (float) (my + fm.getAscent() / 2.0 - 1));
                 continue;
             }
             path.moveTo(x0, y0);
-            java.util.List<Double> xs = new java.util.ArrayList<>();
+            List<Double> xs = new ArrayList<>();
             for (int seg = 0; seg < p.segments(); seg++) {
                 for (int i = 0; i <= 16; i++) xs.add(p.start(seg) + (p.end(seg) - p.start(seg)) * i / 16);
             }
@@ -402,7 +407,7 @@ public final class Drawings {
 
     /** Labels a member's largest and smallest values, skipping any that would overlap a label already drawn. */
     private static void labelPeaks(Graphics2D g, Model m, Frame f, Member mem, Piecewise p, double k, Kind kind,
-                                   java.util.List<java.awt.geom.Rectangle2D> drawn) {
+                                   List<Rectangle2D> drawn) {
         Node a = m.node(mem.from()), b = m.node(mem.to());
         double lm = m.lengthM(mem), ex = m.directionOf(mem)[0], ey = m.directionOf(mem)[1];
         Piecewise.Extreme[] ext = {p.max(), p.min()};
@@ -416,9 +421,9 @@ public final class Drawings {
             double sx = f.x(px) + ey * v * k, sy = f.y(py) + ex * v * k;
             String text = Console.fmt(m.units().fromInternal(v, kind.dimension));
             boolean below = (v * k) >= 0 == (ex >= 0);
-            java.awt.FontMetrics fm = g.getFontMetrics();
+            FontMetrics fm = g.getFontMetrics();
             float tx = (float) (sx + 2), ty = (float) (sy + (below ? 9 : -2));
-            java.awt.geom.Rectangle2D box = new java.awt.geom.Rectangle2D.Double(tx, ty - fm.getAscent(), fm.stringWidth(text), fm.getAscent());
+            Rectangle2D box = new Rectangle2D.Double(tx, ty - fm.getAscent(), fm.stringWidth(text), fm.getAscent());
             if (drawn.stream().anyMatch(r -> r.intersects(box))) continue;
             drawn.add(box);
             g.drawString(text, tx, ty);

@@ -6,6 +6,8 @@ import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.function.Consumer;
 import javax.imageio.ImageIO;
@@ -24,7 +26,7 @@ public final class Figures {
     private Figures() {
     }
 
-    public static Map<String, byte[]> render(Review review, java.util.List<String> sets) throws IOException {
+    public static Map<String, byte[]> render(Review review, List<String> sets) throws IOException {
         Map<String, byte[]> out = new LinkedHashMap<>();
         Analysis a = review.analysis();
         Model m = a.model();
@@ -39,7 +41,7 @@ public final class Figures {
                 Solution s = a.solutions().get(a.primaryEngine()).get(name).representative();
                 for (Drawings.Kind kind : Drawings.Kind.values()) {
                     if (Drawings.blank(m, s, kind)) continue;
-                    out.put(safe(name) + "-" + kind.name().toLowerCase(java.util.Locale.ROOT) + ".png",
+                    out.put(safe(name) + "-" + kind.name().toLowerCase(Locale.ROOT) + ".png",
                             png(499, 150, g -> Drawings.diagram(g, m, s, kind, 499, 150)));
                 }
             }

@@ -1,7 +1,16 @@
 package plumbline.report;
 
-import plumbline.model.Quantity;
-
+import java.awt.Color;
+import java.awt.Graphics2D;
+import java.io.ByteArrayOutputStream;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.function.Consumer;
 import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
@@ -19,27 +28,19 @@ import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfPageEventHelper;
 import com.lowagie.text.pdf.PdfTemplate;
 import com.lowagie.text.pdf.PdfWriter;
-import java.awt.Color;
-import java.awt.Graphics2D;
-import java.io.ByteArrayOutputStream;
-import java.time.LocalDate;
-import java.util.ArrayList;
-import java.util.LinkedHashSet;
-import java.util.List;
-import java.util.Locale;
-import java.util.Set;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
 import plumbline.model.LoadCase;
 import plumbline.model.Model;
+import plumbline.model.Quantity;
 import plumbline.review.Agreement;
 import plumbline.review.Analysis;
-import plumbline.solve.Equilibrium;
 import plumbline.review.ClaimResult;
 import plumbline.review.LoadSet;
 import plumbline.review.LoadSetResult;
 import plumbline.review.Review;
 import plumbline.solve.EngineResult;
+import plumbline.solve.Equilibrium;
 import plumbline.solve.Solution;
 import plumbline.statics.ClaimedEquilibrium;
 import plumbline.statics.Determinacy;
@@ -330,7 +331,7 @@ public final class PdfReport {
         return Console.fmt(u.fromInternal(si, d)) + " " + u.symbol(d);
     }
 
-    private Image picture(PdfWriter writer, float w, float h, java.util.function.Consumer<Graphics2D> draw) throws DocumentException {
+    private Image picture(PdfWriter writer, float w, float h, Consumer<Graphics2D> draw) throws DocumentException {
         PdfTemplate tpl = writer.getDirectContent().createTemplate(w, h);
         Graphics2D g = tpl.createGraphicsShapes(w, h);
         try {
@@ -578,7 +579,7 @@ public final class PdfReport {
         para(doc, "Flexibility coefficients delta_ij = sum of integral(m_i m_j / EI + n_i n_j / EA) + 1/k of springs, "
                 + "in SI units (m/N, rad/N, m/(N*m), rad/(N*m)); redundant i is a unit force or moment:", body);
         float[] widths = new float[red.size() + 1];
-        java.util.Arrays.fill(widths, 1f);
+        Arrays.fill(widths, 1f);
         widths[0] = 1.2f;
         String[] heads = new String[red.size() + 1];
         heads[0] = "delta_ij";
@@ -598,7 +599,7 @@ public final class PdfReport {
             heads2[1 + red.size() + i] = red.get(i);
         }
         float[] w2 = new float[2 * red.size() + 1];
-        java.util.Arrays.fill(w2, 1f);
+        Arrays.fill(w2, 1f);
         PdfPTable t2 = table(w2, heads2);
         for (var e : w.deltaZero().entrySet()) {
             t2.addCell(cell(e.getKey(), smallBold, null));

@@ -1,17 +1,18 @@
 package plumbline.report;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import plumbline.model.Claim;
 import plumbline.model.Model;
 import plumbline.model.Quantity;
+import plumbline.review.Agreement;
 import plumbline.review.Analysis;
 import plumbline.review.ClaimResult;
 import plumbline.review.LoadSet;
 import plumbline.review.LoadSetResult;
-import plumbline.review.Agreement;
 import plumbline.review.Review;
 import plumbline.solve.Equilibrium;
 import plumbline.solve.Solution;
@@ -219,7 +220,7 @@ public final class ResultsTree {
      * Three components per node: the bound of larger magnitude under its key, both bounds
      * into {@code ranges} (they coincide unless the set is a pattern envelope).
      */
-    static Map<String, Object> triples(UnitSystem u, java.util.Collection<String> nodes, String[] keys, Dimension[] dims,
+    static Map<String, Object> triples(UnitSystem u, Collection<String> nodes, String[] keys, Dimension[] dims,
                                        Bounded value, Map<String, Object> ranges) {
         Map<String, Object> out = new LinkedHashMap<>();
         for (String node : nodes) {

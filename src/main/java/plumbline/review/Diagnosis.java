@@ -14,6 +14,10 @@ import plumbline.model.Model;
 import plumbline.model.Quantity;
 import plumbline.model.Support;
 import plumbline.solve.Engine;
+import plumbline.solve.EngineResult;
+import plumbline.solve.MemberFunctions;
+import plumbline.solve.Solution;
+import plumbline.solve.Superposition;
 import plumbline.units.Dimension;
 import plumbline.units.Units;
 
@@ -151,13 +155,13 @@ final class Diagnosis {
         if (own != null && own.origin().startsWith("ASCE/SEI 7-16 section 2.3.1") && !a.model().standardCombinations().contains("asce7-asd")) {
             Model asd = new Model(m.file(), m.job(), m.units(), m.materials(), m.sections(), m.nodes(), m.supports(), m.members(),
                     m.loadCases(), List.of(), List.of("asce7-asd"), m.redundants(), List.of());
-            plumbline.solve.EngineResult er = a.engines().get(engine);
+            EngineResult er = a.engines().get(engine);
             for (LoadSet s : StandardCombinations.expand(asd)) {
                 if (s.factors().keySet().stream().anyMatch(k -> m.loadCase(k).pattern())) continue;
-                Map<plumbline.solve.Solution, Double> parts = new LinkedHashMap<>();
+                Map<Solution, Double> parts = new LinkedHashMap<>();
                 for (var f : s.factors().entrySet()) parts.put(er.cases().get(f.getKey()), f.getValue());
-                plumbline.solve.Solution sol = plumbline.solve.Superposition.combine(a.engineModel(), s.name(), parts,
-                        plumbline.solve.MemberFunctions.SHARED);
+                Solution sol = Superposition.combine(a.engineModel(), s.name(), parts,
+                        MemberFunctions.SHARED);
                 double v = Review.of(new LoadSetResult.Plain(sol), c).value();
                 hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the allowable-stress combination %s "
                         + "(%s %s): ASD (service-level) loads against a strength combination", what, s.name(),

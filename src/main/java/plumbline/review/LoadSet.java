@@ -1,5 +1,7 @@
 package plumbline.review;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
@@ -9,6 +11,6 @@ import java.util.Map;
  */
 public record LoadSet(String name, Map<String, Double> factors, String origin, boolean combination) {
     public LoadSet {
-        factors = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(factors));
+        factors = Collections.unmodifiableMap(new LinkedHashMap<>(factors));
     }
 }

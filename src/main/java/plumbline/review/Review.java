@@ -1,15 +1,20 @@
 package plumbline.review;
 
-import plumbline.model.Quantity;
-
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
+import plumbline.model.Quantity;
+import plumbline.solve.Engine;
+import plumbline.solve.Equilibrium;
 import plumbline.solve.MemberSolution;
 import plumbline.solve.Solution;
 import plumbline.statics.ClaimedEquilibrium;
+import plumbline.units.Dimension;
 import plumbline.validate.Plausibility;
 
 /**
@@ -30,7 +35,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         }
 
         public boolean balanced() {
-            return worstResidual <= plumbline.solve.Equilibrium.TOLERANCE;
+            return worstResidual <= Equilibrium.TOLERANCE;
         }
 
         static Safeguards of(Analysis a) {
@@ -53,7 +58,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
 
         /** Every state an engine's numbers come from: its load cases and each solution of each load set. */
         private static Map<String, Solution> everySolution(Analysis a, String engine) {
-            Map<String, Solution> out = new java.util.LinkedHashMap<>(a.engines().get(engine).cases());
+            Map<String, Solution> out = new LinkedHashMap<>(a.engines().get(engine).cases());
             for (var e : a.solutions().get(engine).entrySet()) {
                 List<Solution> parts = e.getValue().solutions();
                 for (int i = 0; i < parts.size(); i++) out.put("set " + e.getKey() + " #" + i, parts.get(i));
@@ -85,9 +90,9 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
      * @param variantEngine the engine that solves variant models when diagnosing a
      *                      discrepancy (null: no variants are tried)
      */
-    public static Review of(Analysis a, TolerancePolicy policy, plumbline.solve.Engine variantEngine) {
+    public static Review of(Analysis a, TolerancePolicy policy, Engine variantEngine) {
         List<ClaimResult> out = new ArrayList<>();
-        Map<String, Map<String, LoadSetResult>> variantCache = new java.util.HashMap<>();
+        Map<String, Map<String, LoadSetResult>> variantCache = new HashMap<>();
         String primary = a.primaryEngine();
         for (ClaimSet cs : a.model().claims()) {
             for (Claim c : cs.claims()) {
@@ -96,7 +101,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 double force = a.solutions().containsKey("force") ? value(a, "force", c).value : Double.NaN;
                 TolerancePolicy.Applied tol = policy.forClaim(c, cs);
                 double floor = TolerancePolicy.ABSOLUTE_FLOOR_FRACTION * largestOfKind(a, primary, c, v.governing);
-                if (c.dimension().equals(plumbline.units.Dimension.LENGTH)) {
+                if (c.dimension().equals(Dimension.LENGTH)) {
                     floor = Math.max(floor, TolerancePolicy.DISPLACEMENT_NOISE_FRACTION * a.model().extentM());
                 }
                 double diff = Math.abs(c.valueInternal() - v.value);
@@ -111,7 +116,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 out.add(new ClaimResult(c, cs.file(), v.value, force, rel, tol, floor, st, gov, diagnosis));
             }
         }
-        Map<String, Map<String, Double>> factors = new java.util.LinkedHashMap<>();
+        Map<String, Map<String, Double>> factors = new LinkedHashMap<>();
         for (LoadSet s : a.loadSets()) factors.put(s.name(), s.factors());
         List<ClaimedEquilibrium> eq = ClaimedEquilibrium.check(a.model(), factors, ClaimedEquilibrium.DEFAULT_TOLERANCE);
         Safeguards guards = Safeguards.of(a);
@@ -129,7 +134,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                     if (d > span / SPAN_OVER_DEFLECTION_MIN) {
                         warnings.add(new Plausibility.Warning("deflections beyond span/50 are not credible for a linear model "
                                 + "(common practice)", "member " + mem + ", " + set.name(),
-                                String.format(java.util.Locale.ROOT, "deflection = span/%.3g", span / d)));
+                                String.format(Locale.ROOT, "deflection = span/%.3g", span / d)));
                     }
                 }
             }
@@ -138,7 +143,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
     }
 
     /** A computed value, the load set that governs it, and the members loaded for it (pattern loading). */
-    record Value(double value, String governing, java.util.List<String> loaded) {
+    record Value(double value, String governing, List<String> loaded) {
     }
 
 
@@ -171,10 +176,10 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         switch (c.item()) {
             case REACTION:
                 return new Value(s.reaction(c.name(), c.quantity().component, upper), s.name(),
-                        java.util.List.of());
+                        List.of());
             case DISPLACEMENT:
                 return new Value(s.displacement(c.name(), c.quantity().component, upper),
-                        s.name(), java.util.List.of());
+                        s.name(), List.of());
             default: {
                 LoadSetResult.Peak p = s.peak(c.name(), c.quantity());
                 return new Value(p.value(), s.name(), p.loadedMembers());

@@ -1,10 +1,12 @@
 package plumbline.review;
 
+import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import plumbline.model.Combination;
 import plumbline.model.LoadCase;
 import plumbline.model.Model;
 
@@ -28,7 +30,7 @@ import plumbline.model.Model;
  */
 public final class StandardCombinations {
 
-    public static final List<String> SETS = plumbline.model.Combination.STANDARD_SETS;
+    public static final List<String> SETS = Combination.STANDARD_SETS;
 
     private StandardCombinations() {
     }
@@ -168,7 +170,7 @@ public final class StandardCombinations {
 
     /** A factor as written in a clause: four decimals at most, no trailing zeros (1.35, 1.1475). */
     private static String factor(double f) {
-        return new java.math.BigDecimal(String.format(Locale.ROOT, "%.4f", f)).stripTrailingZeros().toPlainString();
+        return new BigDecimal(String.format(Locale.ROOT, "%.4f", f)).stripTrailingZeros().toPlainString();
     }
 
     private static List<LoadSet> en1990(Model model, boolean ab) {

@@ -3,6 +3,7 @@ package plumbline.review;
 import java.util.Map;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
+import plumbline.model.Quantity;
 
 /**
  * Which relative tolerance applies to a claim, and why. Defaults by quantity kind are
@@ -42,7 +43,7 @@ public record TolerancePolicy(double commandLine) {
     static String kindKey(Claim c) {
         if (c.item() == Claim.Kind.REACTION) return "reaction";
         if (c.item() == Claim.Kind.DISPLACEMENT) return "displacement";
-        return c.quantity() == plumbline.model.Quantity.DEFLECTION ? "deflection" : "member";
+        return c.quantity() == Quantity.DEFLECTION ? "deflection" : "member";
     }
 
     public Applied forClaim(Claim c, ClaimSet file) {

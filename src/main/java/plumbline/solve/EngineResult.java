@@ -1,5 +1,7 @@
 package plumbline.solve;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -20,7 +22,7 @@ public record EngineResult(String engine, boolean stable, String instability, Ma
     }
 
     public EngineResult {
-        cases = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(cases));
+        cases = Collections.unmodifiableMap(new LinkedHashMap<>(cases));
         notes = List.copyOf(notes);
         warnings = List.copyOf(warnings);
     }

@@ -1,6 +1,7 @@
 package plumbline.solve;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.TreeSet;
 
@@ -57,7 +58,7 @@ public final class Envelope {
                 }
             }
             double[] roots = sum.derivative().rootsIn(h);
-            double[] ts = java.util.Arrays.copyOf(roots, roots.length + 2);
+            double[] ts = Arrays.copyOf(roots, roots.length + 2);
             ts[roots.length] = 0;
             ts[roots.length + 1] = h;
             for (double t : ts) {

@@ -1,5 +1,7 @@
 package plumbline.solve;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -14,7 +16,7 @@ public record ForceWorking(List<String> redundants, double[][] flexibility, Map<
 
     public ForceWorking {
         redundants = List.copyOf(redundants);
-        deltaZero = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(deltaZero));
-        values = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(values));
+        deltaZero = Collections.unmodifiableMap(new LinkedHashMap<>(deltaZero));
+        values = Collections.unmodifiableMap(new LinkedHashMap<>(values));
     }
 }

@@ -1,7 +1,10 @@
 package plumbline.solve;
 
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import plumbline.model.LoadCase;
 import plumbline.model.LoadDirection;
 import plumbline.model.Material;
@@ -99,12 +102,12 @@ public record MemberActions(double lengthM, List<Linear> distributed, List<Point
     }
 
     /** The local actions of load case {@code c} on every member, keyed by member name (members with none are absent). */
-    public static java.util.Map<String, MemberActions> of(Model model, LoadCase c) {
-        java.util.Map<String, List<MemberLoad>> byMember = new java.util.HashMap<>();
+    public static Map<String, MemberActions> of(Model model, LoadCase c) {
+        Map<String, List<MemberLoad>> byMember = new HashMap<>();
         for (MemberLoad l : c.memberLoads()) byMember.computeIfAbsent(l.member(), k -> new ArrayList<>()).add(l);
-        java.util.Map<String, List<Temperature>> temps = new java.util.HashMap<>();
+        Map<String, List<Temperature>> temps = new HashMap<>();
         for (Temperature t : c.temperatures()) temps.computeIfAbsent(t.member(), k -> new ArrayList<>()).add(t);
-        java.util.Map<String, MemberActions> out = new java.util.LinkedHashMap<>();
+        Map<String, MemberActions> out = new LinkedHashMap<>();
         for (Member m : model.members().values()) {
             List<MemberLoad> loads = byMember.getOrDefault(m.name(), List.of());
             List<Temperature> ts = temps.getOrDefault(m.name(), List.of());

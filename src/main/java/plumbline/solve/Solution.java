@@ -1,5 +1,7 @@
 package plumbline.solve;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
@@ -12,9 +14,9 @@ public record Solution(String name, Map<String, double[]> displacements, Map<Str
                        Map<String, MemberSolution> members, double equilibriumResidual) {
 
     public Solution {
-        displacements = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(displacements));
-        reactions = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(reactions));
-        members = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(members));
+        displacements = Collections.unmodifiableMap(new LinkedHashMap<>(displacements));
+        reactions = Collections.unmodifiableMap(new LinkedHashMap<>(reactions));
+        members = Collections.unmodifiableMap(new LinkedHashMap<>(members));
     }
 
     /**

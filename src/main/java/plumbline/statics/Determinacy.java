@@ -1,8 +1,10 @@
 package plumbline.statics;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
@@ -43,7 +45,7 @@ public final class Determinacy {
     }
 
     /** A mechanism shape: displacement per node {ux, uy, rz}, scaled so the largest translation is 1. */
-    public record Mechanism(java.util.Map<String, double[]> motion, String description) {
+    public record Mechanism(Map<String, double[]> motion, String description) {
     }
 
     public record Result(Classification classification, int degree, int mechanisms, int equations, int unknowns,
@@ -184,7 +186,7 @@ public final class Determinacy {
 
     /** Words for one mechanism shape (node motions in the equation space, the null space of A^T). */
     static Mechanism describe(Model model, EquilibriumMatrix eq, double[] vec, double lc) {
-        java.util.Map<String, double[]> motion = new java.util.LinkedHashMap<>();
+        Map<String, double[]> motion = new LinkedHashMap<>();
         for (Node nd : model.nodes().values()) motion.put(nd.name(), new double[3]);
         for (int i = 0; i < vec.length; i++) {
             EquilibriumMatrix.Equation e = eq.equations().get(i);
@@ -208,7 +210,7 @@ public final class Determinacy {
             double[] d = motion.get(moving.get(0));
             text = "node " + moving.get(0) + " can translate " + direction(d[0], d[1]) + ": " + text;
         }
-        java.util.Map<String, double[]> kept = new java.util.LinkedHashMap<>();
+        Map<String, double[]> kept = new LinkedHashMap<>();
         for (var e : motion.entrySet()) {
             double[] d = e.getValue();
             if (d[0] != 0 || d[1] != 0 || d[2] != 0) kept.put(e.getKey(), d);
@@ -225,9 +227,9 @@ public final class Determinacy {
     }
 
     /** Describes rigid motions of the members: translation, or rotation about a node or a point. */
-    private static String members(Model model, java.util.Map<String, double[]> motion, double lc) {
+    private static String members(Model model, Map<String, double[]> motion, double lc) {
         List<String> parts = new ArrayList<>();
-        java.util.Map<String, List<String>> groups = new java.util.LinkedHashMap<>();
+        Map<String, List<String>> groups = new LinkedHashMap<>();
         for (Member m : model.members().values()) {
             Node a = model.node(m.from()), b = model.node(m.to());
             double[] ua = motion.get(a.name()), ub = motion.get(b.name());

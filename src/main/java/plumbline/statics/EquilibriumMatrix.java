@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
 import plumbline.model.Member;
 import plumbline.model.Model;
 import plumbline.model.Node;
@@ -80,7 +82,7 @@ public final class EquilibriumMatrix {
     }
 
     public static EquilibriumMatrix of(Model model) {
-        java.util.Set<String> rotation = model.rotationalNodes();
+        Set<String> rotation = model.rotationalNodes();
         List<Equation> eqs = new ArrayList<>();
         Map<String, Integer> row = new HashMap<>();
         for (Node n : model.nodes().values()) {
@@ -103,7 +105,7 @@ public final class EquilibriumMatrix {
         double[][] valuesOf = new double[unk.size()][];
         for (int c = 0; c < unk.size(); c++) {
             Unknown u = unk.get(c);
-            java.util.TreeMap<Integer, Double> a = new java.util.TreeMap<>();
+            TreeMap<Integer, Double> a = new TreeMap<>();
             if (u.kind() == Kind.REACTION) {
                 Support s = model.supports().get(u.owner());
                 int r = row.get(u.owner());
@@ -143,7 +145,7 @@ public final class EquilibriumMatrix {
     }
 
     /** Adds to a column the forces on the nodes of m from member end forces f (local). */
-    private static void put(java.util.Map<Integer, Double> a, Map<String, Integer> row, java.util.Set<String> rotation,
+    private static void put(Map<Integer, Double> a, Map<String, Integer> row, Set<String> rotation,
                             Model model, Member m, double[] f) {
         Node ni = model.node(m.from()), nj = model.node(m.to());
         double len = model.lengthM(m);

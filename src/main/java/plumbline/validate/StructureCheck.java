@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import plumbline.model.LoadCase;
+import plumbline.model.LoadDirection;
 import plumbline.model.Material;
 import plumbline.model.Member;
 import plumbline.model.MemberLoad;
@@ -15,6 +16,7 @@ import plumbline.model.Node;
 import plumbline.model.NodeLoad;
 import plumbline.model.Problem;
 import plumbline.model.Section;
+import plumbline.model.SourceRef;
 import plumbline.model.Support;
 import plumbline.model.Temperature;
 
@@ -64,9 +66,9 @@ public final class StructureCheck {
             }
         }
         if (m.members().isEmpty()) {
-            out.add(new Problem(plumbline.model.SourceRef.none(m.file()), "members", "no members; expected at least one"));
+            out.add(new Problem(SourceRef.none(m.file()), "members", "no members; expected at least one"));
         }
-        java.util.Set<String> rotational = m.rotationalNodes();
+        Set<String> rotational = m.rotationalNodes();
         for (LoadCase c : m.loadCases()) {
             String path = "loads." + c.name();
             if (c.selfWeight()) {
@@ -115,7 +117,7 @@ public final class StructureCheck {
     }
 
     private static boolean isAxial(MemberLoad.Distributed d) {
-        return d.dir() == plumbline.model.LoadDirection.LOCAL_X;
+        return d.dir() == LoadDirection.LOCAL_X;
     }
 
 

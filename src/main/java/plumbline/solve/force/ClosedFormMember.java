@@ -1,6 +1,7 @@
 package plumbline.solve.force;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.TreeSet;
 import org.apache.commons.math3.analysis.solvers.LaguerreSolver;
@@ -195,7 +196,7 @@ final class ClosedFormMember {
             add(out, -c[0] / c[1], span, x0);
             return out;
         }
-        for (double u : realRoots(java.util.Arrays.copyOf(c, top + 1), span)) add(out, u, span, x0);
+        for (double u : realRoots(Arrays.copyOf(c, top + 1), span)) add(out, u, span, x0);
         return out;
     }
 

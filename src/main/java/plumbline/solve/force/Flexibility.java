@@ -1,5 +1,8 @@
 package plumbline.solve.force;
 
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import plumbline.model.Member;
 import plumbline.model.Model;
@@ -28,7 +31,7 @@ final class Flexibility {
         int n = eq.unknowns().size();
         double[][] block = new double[n][];
         int[][] group = new int[n][];
-        java.util.Map<String, java.util.List<Integer>> byMember = new java.util.LinkedHashMap<>();
+        Map<String, List<Integer>> byMember = new LinkedHashMap<>();
         for (int j = 0; j < n; j++) {
             EquilibriumMatrix.Unknown u = eq.unknowns().get(j);
             if (u.kind() == EquilibriumMatrix.Kind.REACTION) {
@@ -36,7 +39,7 @@ final class Flexibility {
                 group[j] = new int[]{j};
                 block[j] = new double[]{s.fixed(u.direction()) ? 0 : 1 / s.spring(u.direction())};
             } else {
-                byMember.computeIfAbsent(u.owner(), k -> new java.util.ArrayList<>()).add(j);
+                byMember.computeIfAbsent(u.owner(), k -> new ArrayList<>()).add(j);
             }
         }
         for (var e : byMember.entrySet()) {

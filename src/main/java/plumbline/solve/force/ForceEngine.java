@@ -1,11 +1,14 @@
 package plumbline.solve.force;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.DecompositionSolver;
 import org.apache.commons.math3.linear.LUDecomposition;
@@ -19,13 +22,13 @@ import plumbline.model.Settlement;
 import plumbline.model.Support;
 import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
-import plumbline.solve.ForceWorking;
 import plumbline.solve.Equilibrium;
+import plumbline.solve.ForceWorking;
 import plumbline.solve.MemberActions;
 import plumbline.solve.MemberFunctions;
 import plumbline.solve.MemberLoading;
-import plumbline.solve.Peaks;
 import plumbline.solve.MemberSolution;
+import plumbline.solve.Peaks;
 import plumbline.solve.Solution;
 import plumbline.statics.EquilibriumMatrix;
 import plumbline.statics.ScaledEquilibrium;
@@ -77,7 +80,7 @@ public final class ForceEngine implements Engine {
 
     static int equations(Model model) {
         int m = 0;
-        java.util.Set<String> rot = model.rotationalNodes();
+        Set<String> rot = model.rotationalNodes();
         for (String n : model.nodes().keySet()) m += rot.contains(n) ? 3 : 2;
         return m;
     }
@@ -159,7 +162,7 @@ public final class ForceEngine implements Engine {
         List<Integer> basic = new ArrayList<>();
         List<double[]> pivotVectors = new ArrayList<>();
         int[] pivotOfRow = new int[m];
-        java.util.Arrays.fill(pivotOfRow, -1);
+        Arrays.fill(pivotOfRow, -1);
         for (int j : order) {
             if (named.contains(unk.get(j).label())) continue;
             if (basic.size() == m) break;
@@ -413,8 +416,8 @@ public final class ForceEngine implements Engine {
             at.get(m.from()).add(m);
             at.get(m.to()).add(m);
         }
-        java.util.Set<String> known = new java.util.HashSet<>();
-        java.util.Set<String> done = new java.util.HashSet<>();
+        Set<String> known = new HashSet<>();
+        Set<String> done = new HashSet<>();
         boolean reactionsKnown = false;
         List<String> steps = new ArrayList<>();
         while (done.size() < at.size()) {

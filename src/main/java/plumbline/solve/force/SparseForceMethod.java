@@ -2,10 +2,17 @@ package plumbline.solve.force;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.Comparator;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.stream.IntStream;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
@@ -161,7 +168,7 @@ final class SparseForceMethod {
     private List<Map<Integer, Double>> selfStressStates(PlaneDrawing drawing, int degree) {
         // rings smallest first; the long ones (a chord between two supports) only while states are still missing
         List<int[]> faces = new ArrayList<>(drawing.faces());
-        faces.sort(java.util.Comparator.comparingInt(f -> f.length));
+        faces.sort(Comparator.comparingInt(f -> f.length));
         List<Map<Integer, Double>> states = new ArrayList<>();
         List<int[]> taken = new ArrayList<>();
         for (int[] face : faces) {
@@ -174,13 +181,13 @@ final class SparseForceMethod {
         // a hinge between two panels): each pair of rings that share a member, beyond the states found
         Map<Integer, List<Integer>> facesOfEdge = new HashMap<>();
         for (int f = 0; f < taken.size(); f++) for (int e : taken.get(f)) facesOfEdge.computeIfAbsent(e, k -> new ArrayList<>()).add(f);
-        java.util.Set<Long> tried = new java.util.HashSet<>();
+        Set<Long> tried = new HashSet<>();
         for (int a = 0; a < taken.size() && states.size() < degree; a++) {
-            java.util.TreeSet<Integer> neighbours = new java.util.TreeSet<>();
+            TreeSet<Integer> neighbours = new TreeSet<>();
             for (int e : taken.get(a)) for (int f : facesOfEdge.get(e)) if (f > a) neighbours.add(f);
             for (int b : neighbours) {
                 if (states.size() >= degree || !tried.add((long) a * taken.size() + b)) continue;
-                int[] union = java.util.stream.IntStream.concat(Arrays.stream(taken.get(a)), Arrays.stream(taken.get(b)))
+                int[] union = IntStream.concat(Arrays.stream(taken.get(a)), Arrays.stream(taken.get(b)))
                         .distinct().toArray();
                 if (union.length > LONGEST_RING) continue;
                 addStates(states, ringStates(drawing, union, states));
@@ -352,7 +359,7 @@ final class SparseForceMethod {
      * equilibrium equations, less the span of the {@code known} states it contains.
      */
     private List<Map<Integer, Double>> ringStates(PlaneDrawing drawing, int[] face, List<Map<Integer, Double>> known) {
-        java.util.Set<String> memberNames = new java.util.LinkedHashSet<>(), supports = new java.util.LinkedHashSet<>();
+        Set<String> memberNames = new LinkedHashSet<>(), supports = new LinkedHashSet<>();
         for (int e : face) {
             if (drawing.isMember(e)) memberNames.add(drawing.members().get(e).name());
             else supports.add(drawing.supportNodes().get(e - drawing.members().size()));
@@ -360,8 +367,8 @@ final class SparseForceMethod {
         List<Integer> cols = new ArrayList<>();
         for (String mem : memberNames) cols.addAll(unknownsOfMember.getOrDefault(mem, List.of()));
         for (String sup : supports) cols.addAll(unknownsOfSupport.getOrDefault(sup, List.of()));
-        java.util.Collections.sort(cols);
-        java.util.TreeSet<Integer> rows = new java.util.TreeSet<>();
+        Collections.sort(cols);
+        TreeSet<Integer> rows = new TreeSet<>();
         for (int j : cols) for (int i : scaled.columnRows(j)) rows.add(i);
         List<Integer> rowList = new ArrayList<>(rows);
         Map<Integer, Integer> rowAt = new HashMap<>();
@@ -384,7 +391,7 @@ final class SparseForceMethod {
         Map<Integer, Integer> colAt = new HashMap<>();
         for (int c = 0; c < nc; c++) colAt.put(cols.get(c), c);
         List<double[]> basis = new ArrayList<>();
-        java.util.Set<Integer> candidates = new java.util.TreeSet<>();
+        Set<Integer> candidates = new TreeSet<>();
         for (int j : cols) candidates.addAll(statesByUnknown.getOrDefault(j, List.of()));
         for (int idx : candidates) {
             Map<Integer, Double> st = known.get(idx);

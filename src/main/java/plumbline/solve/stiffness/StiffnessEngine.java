@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import plumbline.linalg.NodeOrdering;
 import plumbline.linalg.SkylineLdl;
@@ -169,7 +170,7 @@ public final class StiffnessEngine implements Engine {
             String node = where.isEmpty() ? "" : where.substring(0, where.indexOf(' '));
             List<String> at2 = new ArrayList<>();
             for (Member m : model.members().values()) if (m.from().equals(node) || m.to().equals(node)) at2.add(m.name());
-            warnings.add(new EngineWarning(ILL_CONDITIONED_RULE, String.format(java.util.Locale.ROOT, "the stiffness matrix is nearly "
+            warnings.add(new EngineWarning(ILL_CONDITIONED_RULE, String.format(Locale.ROOT, "the stiffness matrix is nearly "
                     + "singular at %s (pivot ratio %.1e, about %d digits lost): a near-mechanism or very unequal stiffnesses; "
                     + "members there: %s", where, k.smallestPivotRatio(), (int) Math.round(-Math.log10(k.smallestPivotRatio())),
                     String.join(", ", at2))));
