@@ -17,6 +17,7 @@ import plumbline.report.Figures;
 import plumbline.report.PdfReport;
 import plumbline.report.ResultsTree;
 import plumbline.review.Analysis;
+import plumbline.review.DrawnLoadSets;
 import plumbline.review.Review;
 import plumbline.review.TolerancePolicy;
 import plumbline.solve.Engine;
@@ -110,7 +111,7 @@ final class Run {
         Map<String, byte[]> pictures = null;
         if (figures != null) {
             try {
-                pictures = Figures.render(r, PdfReport.governingSets(r));
+                pictures = Figures.render(r, DrawnLoadSets.choose(r));
             } catch (IOException e) {
                 err.println("plumbline: cannot draw the figures: " + e.getMessage());
                 return Main.INTERNAL;

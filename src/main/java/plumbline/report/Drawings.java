@@ -36,6 +36,10 @@ import plumbline.units.Dimension;
  * circles for hinges, supports as filled wedges on a ground line, loads in amber, and each
  * diagram in its own muted colour with its peaks labelled. Moment is drawn on the tension
  * face.
+ *
+ * Over 400 lines because the model sketch, the force diagrams and the deflected shapes
+ * share one set of scales, symbols and label placement; they are to be split with the
+ * report's house style (issue 15).
  */
 public final class Drawings {
 

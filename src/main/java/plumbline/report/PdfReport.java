@@ -36,6 +36,7 @@ import plumbline.model.Quantity;
 import plumbline.review.Agreement;
 import plumbline.review.Analysis;
 import plumbline.review.ClaimResult;
+import plumbline.review.DrawnLoadSets;
 import plumbline.review.LoadSet;
 import plumbline.review.LoadSetResult;
 import plumbline.review.Review;
@@ -53,6 +54,10 @@ import plumbline.units.UnitSystem;
  * drawings, the force-method working, warnings, cautions and a sign-off block. The only
  * class that uses OpenPDF. Flagged rows are shaded, set in bold and marked with "!!" or
  * "?" so a grey-scale print still shows them.
+ *
+ * Over 400 lines because it writes every section of the report in order, one method a
+ * section, sharing the page furniture (footer, caution, table styles); the drawings are in
+ * {@link Drawings}.
  */
 public final class PdfReport {
 
@@ -496,41 +501,6 @@ public final class PdfReport {
         doc.add(t);
     }
 
-    /** Load sets to draw: those of flagged claims first, then of other claims, then the one with the largest moment. */
-    public static List<String> governingSets(Review review) {
-        return new PdfReport(review, null, null, List.of(), null).governingSets();
-    }
-
-    List<String> governingSets() {
-        Analysis a = review.analysis();
-        Set<String> out = new LinkedHashSet<>();
-        for (ClaimResult c : review.claims()) if (c.status() != ClaimResult.Status.OK && !c.claim().combo().equals("envelope")) out.add(c.claim().combo());
-        for (ClaimResult c : review.claims()) if (c.claim().combo().equals("envelope") && c.governing() != null) out.add(c.governing().split(" with ")[0]);
-        for (ClaimResult c : review.claims()) if (!c.claim().combo().equals("envelope")) out.add(c.claim().combo());
-        if (a.stable() && out.isEmpty()) {
-            String best = null;
-            double bestM = -1;
-            for (LoadSet s : a.loadSets()) {
-                double mm = 0;
-                for (var ms : a.solutions().get(a.primaryEngine()).get(s.name()).representative().members().values()) {
-                    mm = Math.max(mm, ms.peaks().value(Quantity.M_ABS));
-                }
-                boolean preferred = best == null || (s.combination() && !isCombination(a, best)) || (s.combination() == isCombination(a, best) && mm > bestM);
-                if (preferred) {
-                    bestM = mm;
-                    best = s.name();
-                }
-            }
-            if (best != null) out.add(best);
-        }
-        List<String> l = new ArrayList<>(out);
-        return l.subList(0, Math.min(2, l.size()));
-    }
-
-    private static boolean isCombination(Analysis a, String name) {
-        return a.loadSets().stream().anyMatch(s -> s.name().equals(name) && s.combination());
-    }
-
     private void diagrams(Document doc, PdfWriter writer, Model m) throws DocumentException {
         Analysis a = review.analysis();
         if (!a.stable()) return;
@@ -539,7 +509,7 @@ public final class PdfReport {
                 + "local -y side); axial and shear force are drawn positive on the local +y side (above a beam drawn left to "
                 + "right). Each member's largest and smallest values are labelled in "
                 + m.units().force().symbol() + " and " + m.units().length().symbol() + ".", body);
-        for (String name : governingSets()) {
+        for (String name : DrawnLoadSets.choose(review)) {
             LoadSetResult r = a.solutions().get(a.primaryEngine()).get(name);
             Solution s = r.representative();
             para(doc, "Load set " + name + (r.patterned() ? " (every patterned load on; tabulated peaks are the envelope's)" : ""), bold);
@@ -570,11 +540,11 @@ public final class PdfReport {
             return;
         }
         var w = force.working();
-        for (String n : force.notes()) {
-            if (n.startsWith("flexibility coefficients delta_ij") || n.startsWith("case ")) continue; // tabulated below
-            para(doc, n, small);
+        for (String n : force.notes()) para(doc, n, small);
+        if (w == null || !w.listed()) {
+            if (w != null) for (String n : w.lines()) para(doc, n, small); // the size of a matrix too large to list
+            return;
         }
-        if (w == null || w.flexibility().length == 0) return;
         List<String> red = w.redundants();
         para(doc, "Flexibility coefficients delta_ij = sum of integral(m_i m_j / EI + n_i n_j / EA) + 1/k of springs, "
                 + "in SI units (m/N, rad/N, m/(N*m), rad/(N*m)); redundant i is a unit force or moment:", body);

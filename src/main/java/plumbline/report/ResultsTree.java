@@ -1,10 +1,13 @@
 package plumbline.report;
 
+import java.io.IOException;
+import java.io.InputStream;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Properties;
 import plumbline.model.Claim;
 import plumbline.model.Model;
 import plumbline.model.Quantity;
@@ -28,7 +31,18 @@ import plumbline.units.UnitSystem;
  */
 public final class ResultsTree {
 
-    public static final String TOOL_VERSION = "1.0.0";
+    public static final String TOOL_VERSION = toolVersion();
+
+    /** The version written once in pom.xml, which the build copies into version.properties. */
+    private static String toolVersion() {
+        Properties p = new Properties();
+        try (InputStream in = ResultsTree.class.getResourceAsStream("/plumbline/version.properties")) {
+            if (in != null) p.load(in);
+        } catch (IOException e) {
+            // fall through: a jar without the file is a build error, shown as "unknown"
+        }
+        return p.getProperty("version", "unknown");
+    }
     static final List<Quantity> PEAKS = Quantity.of(Claim.Kind.MEMBER);
 
     private ResultsTree() {
@@ -56,8 +70,10 @@ public final class ResultsTree {
         root.put("engine", engineShown);
         Map<String, Object> engines = new LinkedHashMap<>();
         a.engines().forEach((k, v) -> {
-            // warnings are listed among the notes, each beginning "warning:" (the format's notes)
+            // the format's notes: the engine's remarks, the force-method working as text, then
+            // the warnings, each beginning "warning:"
             List<String> notes = new ArrayList<>(v.notes());
+            if (v.working() != null) notes.addAll(v.working().lines());
             for (var w : v.warnings()) notes.add("warning: " + w.found());
             Map<String, Object> e = map("stable", v.stable(), "declined", v.declined(), "instability", v.instability(), "notes", notes);
             if (v.working() != null) {

@@ -49,11 +49,13 @@ import plumbline.statics.ScaledEquilibrium;
  * components. The equations (X^T F X) z = -X^T (F x0 + e - d) are the classic
  * delta_ij z_j + Delta_i0 = 0. Node displacements come from unit virtual loads on the
  * primary structure: u_i = x_i^T (F x + e - d).
+ *
+ * Over 400 lines on purpose: the whole dense method (primary structure, redundants,
+ * flexibility, compatibility, recovery of displacements and member actions) in one place,
+ * read as the textbook derivation; the sparse method and the closed-form member terms are
+ * apart.
  */
 public final class ForceEngine implements Engine {
-
-    /** The working (flexibility matrix, compatibility terms) is listed in full up to this many redundants. */
-    static final int WORKING_SHOWN = 12;
 
     /** Columns whose residual norm after projection falls below this fraction of their own norm add no rank. */
     static final double INDEPENDENCE_TOLERANCE = 1e-9;
@@ -243,8 +245,6 @@ public final class ForceEngine implements Engine {
                 : String.join(", ", redundant.stream().map(j -> unk.get(j).label()).toList()));
         notes.add(working.toString());
         if (r == 0 && model.members().values().stream().allMatch(Member::truss)) notes.add(jointOrder(model));
-        if (r > 0 && r <= WORKING_SHOWN) notes.add("flexibility coefficients delta_ij (SI): " + matrixText(delta.getData()));
-        else if (r > 0) notes.add("flexibility coefficients: a " + r + " x " + r + " matrix (listed for up to " + WORKING_SHOWN + " redundants)");
         for (LoadCase c : model.loadCases()) {
             Map<String, MemberActions> actions = loading.of(model, c);
             Map<String, double[]> particular = new HashMap<>();
@@ -269,8 +269,7 @@ public final class ForceEngine implements Engine {
                 double[] neg = new double[r];
                 for (int k = 0; k < r; k++) neg[k] = -delta0[k];
                 z = compat.solve(new org.apache.commons.math3.linear.ArrayRealVector(neg, false)).toArray();
-                if (r <= WORKING_SHOWN) {
-                    notes.add("case " + c.name() + ": Delta_i0 = " + vectorText(delta0) + "; redundants = " + vectorText(z));
+                if (r <= ForceWorking.LISTED_UP_TO) {
                     deltaZeros.put(c.name(), delta0.clone());
                     redundantValues.put(c.name(), z.clone());
                 }
@@ -287,7 +286,7 @@ public final class ForceEngine implements Engine {
             cases.put(c.name(), assemble(model, eq, c, actions, particular, xs, u, row, functions));
         }
         ForceWorking record = new ForceWorking(redundant.stream().map(j -> unk.get(j).label()).toList(),
-                r > 0 && r <= WORKING_SHOWN ? delta.getData() : new double[0][], deltaZeros, redundantValues);
+                r > 0 && r <= ForceWorking.LISTED_UP_TO ? delta.getData() : new double[0][], deltaZeros, redundantValues);
         return new EngineResult(name(), true, null, cases, notes, List.of(), false, record);
     }
 
@@ -468,17 +467,5 @@ public final class ForceEngine implements Engine {
             }
         }
         return out;
-    }
-
-    static String vectorText(double[] v) {
-        StringBuilder sb = new StringBuilder("[");
-        for (int i = 0; i < v.length; i++) sb.append(i == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.6g", v[i]));
-        return sb.append("]").toString();
-    }
-
-    static String matrixText(double[][] a) {
-        StringBuilder sb = new StringBuilder("[");
-        for (int i = 0; i < a.length; i++) sb.append(i == 0 ? "" : "; ").append(vectorText(a[i]));
-        return sb.append("]").toString();
     }
 }

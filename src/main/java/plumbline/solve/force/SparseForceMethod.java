@@ -40,6 +40,10 @@ import plumbline.statics.ScaledEquilibrium;
  * states are counted against the degree of indeterminacy, and when the rings do not supply
  * exactly that many independent states (a drawing with crossing members, releases that
  * make a ring a mechanism) the method declines and says so.
+ *
+ * Over 400 lines because it is one method read top to bottom (the drawing's faces, the
+ * ring states, the normal equations, the per-case compatibility); the plane drawing is
+ * already apart ({@link PlaneDrawing}).
  */
 final class SparseForceMethod {
 

@@ -78,11 +78,4 @@ class ForceEngineInternalsTest {
         assertEquals("method of joints order: reactions from the equilibrium of the whole truss; joint A (AD, AC); "
                 + "joint D (DB, DC); joint B (CB); joint C (check)", r.notes().get(1));
     }
-
-    @Test
-    void theWorkingPrintsSixSignificantFigures() {
-        assertEquals("[1.00000, -2.50000e-07, 123457]", ForceEngine.vectorText(new double[]{1, -2.5e-7, 123456.7}));
-        assertEquals("[]", ForceEngine.vectorText(new double[0]));
-        assertEquals("[[1.00000, 2.00000]; [3.00000, 4.00000]]", ForceEngine.matrixText(new double[][]{{1, 2}, {3, 4}}));
-    }
 }

@@ -1,0 +1,46 @@
+package plumbline.review;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.List;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The load sets the report draws, on the simple beam of {@link ReviewTest} (L = 6 m, dead
+ * 10 kN/m, live 5 kN/m, ASCE 7 strength combinations): by hand the largest factored load is
+ * 1.2 D + 1.6 L = 20 kN/m (combination 2), M = wL^2/8 = 90 kN*m.
+ */
+class DrawnLoadSetsTest {
+
+    @Test
+    void withNoClaimsTheCombinationWithTheLargestMomentIsDrawn() {
+        Review r = ReviewTest.review("", Double.NaN);
+        assertEquals(List.of("asce7-strength/2"), DrawnLoadSets.choose(r));
+    }
+
+    @Test
+    void flaggedClaimsComeFirstThenTheOthers() {
+        // R_A under D is wL/2 = 30 kN: 45 is flagged, L's 15 kN is right
+        Review r = ReviewTest.review("""
+                claims:
+                  reactions:
+                    - {node: A, combo: L, Fy: 15}
+                    - {node: A, combo: D, Fy: 45}
+                """, Double.NaN);
+        assertEquals(List.of("D", "L"), DrawnLoadSets.choose(r));
+    }
+
+    @Test
+    void theSetGoverningAnEnvelopeClaimComesBeforeOtherClaimsSetsAndAtMostTwoAreDrawn() {
+        Review r = ReviewTest.review("""
+                claims:
+                  reactions:
+                    - {node: A, combo: L, Fy: 15}
+                    - {node: A, combo: D, Fy: 45}
+                  members:
+                    - {member: M1, combo: envelope, M_max: 90}
+                """, Double.NaN);
+        assertEquals(2, DrawnLoadSets.AT_MOST);
+        assertEquals(List.of("D", "asce7-strength/2"), DrawnLoadSets.choose(r));
+    }
+}
