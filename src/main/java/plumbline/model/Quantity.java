@@ -71,6 +71,13 @@ public enum Quantity {
         return of(item).stream().map(q -> q.symbol).toList();
     }
 
+    /** The other extreme of the same function (M_min for M_max); a magnitude or a component is its own. */
+    public Quantity otherExtreme() {
+        if (extreme == null || extreme == Extreme.ABS) return this;
+        for (Quantity q : values()) if (q.function == function && q.extreme != extreme && q.extreme != Extreme.ABS) return q;
+        throw new IllegalStateException(symbol);
+    }
+
     /** The largest magnitude of the same function (M_abs for M_max); the deflection is its own. */
     public Quantity magnitude() {
         for (Quantity q : values()) if (q.function == function && q.extreme == Extreme.ABS && function != null) return q;

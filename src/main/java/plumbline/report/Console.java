@@ -107,12 +107,20 @@ public final class Console {
                                 ? "under the absolute floor" : pct(c.relativeDifference()),
                         pct(c.tolerance().relative()));
                 sb.append(wrap(line, "         "));
-                if (c.diagnosis() != null) sb.append(wrap("         likely: " + c.diagnosis(), "         "));
+                if (c.explanation() > 0) {
+                    sb.append(wrap("         likely: E" + c.explanation() + " below" + (c.ownDiagnosis() == null ? ""
+                            : "; this claim alone: " + c.ownDiagnosis()), "         "));
+                } else if (c.ownDiagnosis() != null) {
+                    sb.append(wrap("         likely: " + c.ownDiagnosis(), "         "));
+                } else if (c.status() != ClaimResult.Status.OK) {
+                    sb.append(wrap("         not explained: no change tried reproduces this value", "         "));
+                }
             }
             long ok = r.claims().stream().filter(c -> c.status() == ClaimResult.Status.OK).count();
             long mg = r.claims().stream().filter(c -> c.status() == ClaimResult.Status.MARGINAL).count();
             long mm = r.claims().stream().filter(c -> c.status() == ClaimResult.Status.MISMATCH).count();
             sb.append(String.format(Locale.ROOT, "Claims: %d ok, %d marginal, %d mismatch%n", ok, mg, mm));
+            if (mg + mm > 0) sb.append(explanations(r));
         }
         if (!r.warnings().isEmpty()) {
             sb.append("Plausibility warnings:\n");
@@ -211,6 +219,25 @@ public final class Console {
             return String.format(Locale.ROOT, "%." + digits + "f", v);
         }
         return String.format(Locale.ROOT, "%.3e", v);
+    }
+
+
+    /**
+     * The explanations of the claim set, best first, each with the claims that support it;
+     * or, when none was found, a plain statement that no single change explains the set.
+     */
+    static String explanations(Review r) {
+        StringBuilder sb = new StringBuilder();
+        if (r.explanations().isEmpty()) {
+            sb.append(wrap("Explanations: no single change tried explains two or more flagged claims, or all of them", "  "));
+            return sb.toString();
+        }
+        sb.append(wrap("Explanations (each one change, scored on all " + r.claims().size() + " claims):", "  "));
+        for (int i = 0; i < r.explanations().size(); i++) {
+            var e = r.explanations().get(i);
+            sb.append(wrap("  E" + (i + 1) + " " + e.sentence() + " (" + e.support() + ")", "     "));
+        }
+        return sb.toString();
     }
 
     /** Wraps a line at word boundaries to {@link #WIDTH}, continuation lines indented. */

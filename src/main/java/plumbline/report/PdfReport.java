@@ -448,9 +448,35 @@ public final class PdfReport {
                 t.addCell(cell(Console.pct(c.tolerance().relative()) + " " + shortWhy(c.tolerance().why()), small, shade));
                 t.addCell(cell(c.status().word.toUpperCase(Locale.ROOT), f, shade));
                 String gov = c.claim().combo().equals("envelope") || c.governing().contains(" with loads on ") ? "governs: " + c.governing() : "";
-                t.addCell(cell(c.diagnosis() != null ? c.diagnosis() : gov, small, shade));
+                String diagnosis = c.explanation() > 0
+                        ? "E" + c.explanation() + " (below)" + (c.ownDiagnosis() != null ? "; this claim alone: " + c.ownDiagnosis() : "")
+                        : c.ownDiagnosis() != null ? c.ownDiagnosis()
+                        : c.status() != ClaimResult.Status.OK ? "not explained by any change tried" : gov;
+                t.addCell(cell(diagnosis, small, shade));
             }
             doc.add(t);
+        }
+        explanations(doc);
+    }
+
+    /** What went wrong with the claim set as a whole: the explanations, each with the claims that support it. */
+    private void explanations(Document doc) throws DocumentException {
+        if (review.claims().stream().allMatch(c -> c.status() == ClaimResult.Status.OK)) return;
+        para(doc, "Explanations of the claim set", bold);
+        if (review.explanations().isEmpty()) {
+            para(doc, "No single change tried (a unit, a sign convention or a scale over the claims; a load case left out, "
+                    + "doubled or scaled; a case missing from a combination; load factors left out; self-weight twice; "
+                    + "pattern loading omitted; a support's fixity; a load on another member) brings two or more flagged "
+                    + "claims, or every claim, within tolerance. The flagged claims need the originator's answer.", body);
+            return;
+        }
+        para(doc, "Each change below was made once and every claim compared again (" + review.claims().size()
+                + " claims). A change is a lead for the originator, not a finding: the count of claims it explains is the "
+                + "evidence for it.", body);
+        for (int i = 0; i < review.explanations().size(); i++) {
+            var e = review.explanations().get(i);
+            para(doc, "E" + (i + 1) + "  " + e.sentence() + " (" + e.support() + ")"
+                    + (e.breaks().isEmpty() ? "" : "; it would break " + String.join(", ", e.breaks())), small);
         }
     }
 

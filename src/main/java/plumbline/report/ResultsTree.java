@@ -99,6 +99,12 @@ public final class ResultsTree {
         List<Object> claims = new ArrayList<>();
         for (ClaimResult r : review.claims()) claims.add(claim(u, r));
         root.put("claims", claims);
+        List<Object> explanations = new ArrayList<>();
+        for (var e : review.explanations()) {
+            explanations.add(map("sentence", e.sentence(), "changes", e.changes(), "explains", e.explains(), "breaks", e.breaks(),
+                    "all_ok_after", e.allOkAfter()));
+        }
+        root.put("explanations", explanations);
         List<Object> eq = new ArrayList<>();
         for (ClaimedEquilibrium e : review.equilibrium()) eq.add(equilibrium(u, e));
         root.put("claimed_equilibrium", eq);

@@ -78,7 +78,8 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
         return new Analysis(model, em, det, sets, results, sols);
     }
 
-    private static LoadSetResult result(Model model, Model em, EngineResult r, LoadSet s, MemberFunctions fn) {
+    /** The result of load set {@code s} from the engine's load-case solutions, by superposition (pattern parts kept apart). */
+    static LoadSetResult result(Model model, Model em, EngineResult r, LoadSet s, MemberFunctions fn) {
         boolean patterned = s.factors().keySet().stream().anyMatch(c -> model.loadCase(c).pattern());
         if (!patterned) {
             Solution bare = r.cases().get(s.name()); // a load case on its own needs no superposition

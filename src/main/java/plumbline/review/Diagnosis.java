@@ -38,12 +38,17 @@ final class Diagnosis {
     }
 
     /** A unit a number may really have been in: its label and its value in SI. */
-    private record Slip(String label, double toSi) {
+    record Slip(String label, double toSi) {
+    }
+
+    /** Whether the slip's unit is the unit the claim was written in (then it is no slip). */
+    static boolean sameUnit(Slip s, String writtenUnit) {
+        return s.label.startsWith(writtenUnit + " ") || s.label.equals(writtenUnit);
     }
 
     private static final double LBF = Units.LBF_IN_N, FT = Units.FOOT_IN_M, IN = Units.INCH_IN_M, G = 9.80665;
 
-    private static List<Slip> slips(Dimension d) {
+    static List<Slip> slips(Dimension d) {
         if (d.equals(Dimension.FORCE)) {
             return List.of(new Slip("N", 1), new Slip("kN", 1e3), new Slip("MN", 1e6), new Slip("lbf", LBF),
                     new Slip("kip", 1e3 * LBF), new Slip("tonne (mass taken as force, 9.81 kN)", 1e3 * G),
@@ -52,7 +57,8 @@ final class Diagnosis {
         if (d.equals(Dimension.MOMENT)) {
             return List.of(new Slip("N*m", 1), new Slip("kN*m", 1e3), new Slip("kip*ft", 1e3 * LBF * FT),
                     new Slip("kip*in", 1e3 * LBF * IN), new Slip("lbf*ft", LBF * FT), new Slip("lbf*in", LBF * IN),
-                    new Slip("kN*mm", 1.0), new Slip("tonne*m (mass taken as force)", 1e3 * G));
+                    new Slip("kN*mm", 1.0), new Slip("N*mm", 1e-3), new Slip("kN*cm", 10.0),
+                    new Slip("tonne*m (mass taken as force)", 1e3 * G));
         }
         if (d.equals(Dimension.LENGTH)) {
             return List.of(new Slip("mm", 1e-3), new Slip("cm", 1e-2), new Slip("m", 1), new Slip("in", IN), new Slip("ft", FT));
@@ -65,7 +71,7 @@ final class Diagnosis {
     }
 
     static String explain(Analysis a, String engine, Claim c, double computed, double tolerance, Engine variantEngine,
-                          Map<String, Map<String, LoadSetResult>> variantCache) {
+                          Map<String, Analysis> variantCache) {
         List<Hypothesis> hs = new ArrayList<>();
         Model m = a.model();
         String what = describe(c);
@@ -75,7 +81,7 @@ final class Diagnosis {
         if (Double.isFinite(c.writtenValue())) {
             for (Slip s : slips(c.dimension())) {
                 double inSlip = computed / s.toSi;
-                if (s.label.startsWith(c.writtenUnit() + " ") || s.label.equals(c.writtenUnit())) continue;
+                if (sameUnit(s, c.writtenUnit())) continue;
                 hs.add(new Hypothesis(inSlip * factorOfWritten(c), String.format(Locale.ROOT,
                         "claimed %s = %s %s equals the computed %s %s expressed in %s (%s): likely unit slip", what,
                         fmt(c.writtenValue()), c.writtenUnit(), fmt(shownComputed), unitShown, s.label, fmt(inSlip))));
@@ -193,44 +199,26 @@ final class Diagnosis {
     }
 
     /** SI per unit of the written number, so a slip candidate in the written number becomes SI. */
-    private static double factorOfWritten(Claim c) {
+    static double factorOfWritten(Claim c) {
         return c.writtenValue() == 0 ? 1 : c.valueInternal() / c.writtenValue();
     }
 
-    private static void variants(Analysis a, Claim c, Engine engine, Map<String, Map<String, LoadSetResult>> cache,
+    /** The words of the re-solved variant that takes distributed loads per sloped length instead of per plan. */
+    static final String PER_SLOPE = "the load taken per sloped length instead of per plan (the 1/cos factor)";
+
+    private static void variants(Analysis a, Claim c, Engine engine, Map<String, Analysis> cache,
                                  List<Hypothesis> hs, String what, String unitShown) {
         Model m = a.model();
         Map<String, Function<Model, Model>> tries = new LinkedHashMap<>();
-        if (m.loadCases().stream().anyMatch(LoadCase::selfWeight)) {
-            tries.put("self-weight omitted", x -> withCases(x, lc -> new LoadCase(lc.name(), lc.type(), false, lc.pattern(),
-                    lc.memberLoads(), lc.nodeLoads(), lc.temperatures(), lc.settlements(), lc.at())));
-        }
-        boolean plan = m.loadCases().stream().flatMap(lc -> lc.memberLoads().stream())
-                .anyMatch(l -> l instanceof MemberLoad.Distributed d && d.perPlan());
-        if (plan) {
-            tries.put("the load taken per sloped length instead of per plan (the 1/cos factor)", x -> withCases(x, lc -> new LoadCase(lc.name(),
-                    lc.type(), lc.selfWeight(), lc.pattern(), lc.memberLoads().stream().map(l -> l instanceof MemberLoad.Distributed d && d.perPlan()
-                    ? new MemberLoad.Distributed(d.member(), d.dir(), false, d.fromM(), d.toM(), d.w1NPerM(), d.w2NPerM(), d.at()) : l).toList(),
-                    lc.nodeLoads(), lc.temperatures(), lc.settlements(), lc.at())));
-        }
+        if (m.loadCases().stream().anyMatch(LoadCase::selfWeight)) tries.put("self-weight omitted", Diagnosis::withoutSelfWeight);
+        if (hasPerPlan(m)) tries.put(PER_SLOPE, Diagnosis::perSlope);
         for (Support s : m.supports().values()) {
-            boolean fixed = s.fixUx() && s.fixUy() && s.fixRz(), pinned = s.fixUx() && s.fixUy() && !s.fixRz();
-            if (!fixed && !pinned) continue;
-            tries.put("support " + s.node() + " taken as " + (fixed ? "pinned instead of fixed" : "fixed instead of pinned"), x -> {
-                Map<String, Support> sup = new LinkedHashMap<>(x.supports());
-                sup.put(s.node(), new Support(s.node(), true, true, pinned, s.angleRad(), s.springUxNPerM(), s.springUyNPerM(),
-                        s.springRzNmPerRad(), s.at()));
-                return new Model(x.file(), x.job(), x.units(), x.materials(), x.sections(), x.nodes(), sup, x.members(),
-                        x.loadCases(), x.combinations(), x.standardCombinations(), x.redundants(), List.of());
-            });
+            if (isFixed(s) || isPinned(s)) tries.put(fixityWords(s), x -> withFixity(x, List.of(s)));
         }
         for (var t : tries.entrySet()) {
-            Map<String, LoadSetResult> sols = cache.computeIfAbsent(t.getKey(), k -> {
-                Model v = t.getValue().apply(m);
-                Analysis va = Analysis.of(v, List.of(engine));
-                return va.stable() ? va.solutions().get(engine.name()) : Map.of();
-            });
-            LoadSetResult r = sols.get(c.combo());
+            Analysis va = cache.computeIfAbsent(t.getKey(), k -> Analysis.of(t.getValue().apply(m), List.of(engine)));
+            if (!va.stable() || !va.solutions().containsKey(engine.name())) continue;
+            LoadSetResult r = va.solutions().get(engine.name()).get(c.combo());
             if (r == null) continue;
             if (c.combo().equals("envelope")) continue;
             double v = Review.of(r, c).value();
@@ -239,7 +227,49 @@ final class Diagnosis {
         }
     }
 
-    private static Model withCases(Model x, Function<LoadCase, LoadCase> f) {
+    static boolean isFixed(Support s) {
+        return s.fixUx() && s.fixUy() && s.fixRz();
+    }
+
+    static boolean isPinned(Support s) {
+        return s.fixUx() && s.fixUy() && !s.fixRz();
+    }
+
+    /** "support B taken as pinned instead of fixed" (or the reverse). */
+    static String fixityWords(Support s) {
+        return "support " + s.node() + " taken as " + (isFixed(s) ? "pinned instead of fixed" : "fixed instead of pinned");
+    }
+
+    /** The model with each of {@code supports} turned from fixed to pinned or from pinned to fixed. */
+    static Model withFixity(Model x, List<Support> supports) {
+        Map<String, Support> sup = new LinkedHashMap<>(x.supports());
+        for (Support s : supports) {
+            sup.put(s.node(), new Support(s.node(), true, true, isPinned(s), s.angleRad(), s.springUxNPerM(), s.springUyNPerM(),
+                    s.springRzNmPerRad(), s.at()));
+        }
+        return new Model(x.file(), x.job(), x.units(), x.materials(), x.sections(), x.nodes(), sup, x.members(),
+                x.loadCases(), x.combinations(), x.standardCombinations(), x.redundants(), List.of());
+    }
+
+    static Model withoutSelfWeight(Model x) {
+        return withCases(x, lc -> new LoadCase(lc.name(), lc.type(), false, lc.pattern(),
+                lc.memberLoads(), lc.nodeLoads(), lc.temperatures(), lc.settlements(), lc.at()));
+    }
+
+    static boolean hasPerPlan(Model m) {
+        return m.loadCases().stream().flatMap(lc -> lc.memberLoads().stream())
+                .anyMatch(l -> l instanceof MemberLoad.Distributed d && d.perPlan());
+    }
+
+    /** The model with every per-plan distributed load taken per sloped length (the 1/cos factor left out). */
+    static Model perSlope(Model x) {
+        return withCases(x, lc -> new LoadCase(lc.name(), lc.type(), lc.selfWeight(), lc.pattern(), lc.memberLoads().stream()
+                .map(l -> l instanceof MemberLoad.Distributed d && d.perPlan()
+                        ? new MemberLoad.Distributed(d.member(), d.dir(), false, d.fromM(), d.toM(), d.w1NPerM(), d.w2NPerM(), d.at()) : l)
+                .toList(), lc.nodeLoads(), lc.temperatures(), lc.settlements(), lc.at()));
+    }
+
+    static Model withCases(Model x, Function<LoadCase, LoadCase> f) {
         return new Model(x.file(), x.job(), x.units(), x.materials(), x.sections(), x.nodes(), x.supports(), x.members(),
                 x.loadCases().stream().map(f).toList(), x.combinations(), x.standardCombinations(), x.redundants(), List.of());
     }

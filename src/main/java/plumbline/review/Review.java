@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.function.Function;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
 import plumbline.model.Quantity;
@@ -22,7 +23,8 @@ import plumbline.validate.Plausibility;
  * unstable. Envelope claims take the most severe value over all combinations.
  */
 public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEquilibrium> equilibrium,
-                     List<Plausibility.Warning> warnings, Safeguards safeguards, Verdict verdict) {
+                     List<Plausibility.Warning> warnings, Safeguards safeguards, Verdict verdict,
+                     List<Explanation> explanations) {
 
     /**
      * The run's own checks: the largest relative difference between the two methods over
@@ -92,7 +94,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
      */
     public static Review of(Analysis a, TolerancePolicy policy, Engine variantEngine) {
         List<ClaimResult> out = new ArrayList<>();
-        Map<String, Map<String, LoadSetResult>> variantCache = new HashMap<>();
+        Map<String, Analysis> variantCache = new HashMap<>();
         String primary = a.primaryEngine();
         for (ClaimSet cs : a.model().claims()) {
             for (Claim c : cs.claims()) {
@@ -113,12 +115,15 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 String gov = v.governing + (v.loaded.isEmpty() ? "" : " with loads on " + String.join(", ", v.loaded));
                 String diagnosis = st == ClaimResult.Status.OK ? null
                         : Diagnosis.explain(a, primary, c, v.value, tol.relative(), variantEngine, variantCache);
-                out.add(new ClaimResult(c, cs.file(), v.value, force, rel, tol, floor, st, gov, diagnosis));
+                out.add(new ClaimResult(c, cs.file(), v.value, force, rel, tol, floor, st, gov, diagnosis, 0, diagnosis));
             }
         }
         Map<String, Map<String, Double>> factors = new LinkedHashMap<>();
         for (LoadSet s : a.loadSets()) factors.put(s.name(), s.factors());
         List<ClaimedEquilibrium> eq = ClaimedEquilibrium.check(a.model(), factors, ClaimedEquilibrium.DEFAULT_TOLERANCE);
+        List<Explanation> explanations = primary == null ? List.of()
+                : Explanations.search(a, primary, out, variantEngine, variantCache, eq);
+        out = withExplanations(out, explanations);
         Safeguards guards = Safeguards.of(a);
         Verdict verdict = verdict(a.stable(), guards, out, eq.stream().allMatch(ClaimedEquilibrium::balanced));
         List<Plausibility.Warning> warnings = new ArrayList<>(Plausibility.check(a.model()));
@@ -139,7 +144,28 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 }
             }
         }
-        return new Review(a, out, eq, warnings, guards, verdict);
+        return new Review(a, out, eq, warnings, guards, verdict, explanations);
+    }
+
+    /**
+     * Each flagged claim's diagnosis names the best explanation of the set that covers it
+     * ("E1: ..."), with how many claims support it; the claim's own diagnosis follows.
+     */
+    static List<ClaimResult> withExplanations(List<ClaimResult> results, List<Explanation> explanations) {
+        List<ClaimResult> out = new ArrayList<>();
+        for (ClaimResult r : results) {
+            String own = r.ownDiagnosis(), d = own;
+            int covering = 0;
+            for (int i = 0; i < explanations.size() && covering == 0; i++) {
+                Explanation e = explanations.get(i);
+                if (!e.explains().contains(r.claim().id())) continue;
+                covering = i + 1;
+                d = "E" + covering + ": " + e.sentence() + " (" + e.support() + ")" + (own == null ? "" : "; for this claim alone: " + own);
+            }
+            out.add(new ClaimResult(r.claim(), r.claimsFile(), r.computed(), r.computedForce(), r.relativeDifference(),
+                    r.tolerance(), r.absoluteFloor(), r.status(), r.governing(), d, covering, own));
+        }
+        return out;
     }
 
     /** A computed value, the load set that governs it, and the members loaded for it (pattern loading). */
@@ -154,12 +180,21 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
      * value over the combinations.
      */
     static Value value(Analysis a, String engine, Claim c) {
-        Map<String, LoadSetResult> sols = a.solutions().get(engine);
-        if (!c.combo().equals("envelope")) return of(sols.get(c.combo()), c);
+        return value(a.loadSets(), a.solutions().get(engine), c);
+    }
+
+    /** The computed value of the claimed quantity among the results {@code sols} of the load sets {@code sets}. */
+    static Value value(List<LoadSet> sets, Map<String, LoadSetResult> sols, Claim c) {
+        return value(sets, sols::get, c);
+    }
+
+    /** As above, the results found by name on demand (a change that recomputes only the sets a claim needs). */
+    static Value value(List<LoadSet> sets, Function<String, LoadSetResult> sols, Claim c) {
+        if (!c.combo().equals("envelope")) return of(sols.apply(c.combo()), c);
         Value best = null;
-        for (LoadSet s : a.loadSets()) {
+        for (LoadSet s : sets) {
             if (!s.combination()) continue;
-            Value v = of(sols.get(s.name()), c);
+            Value v = of(sols.apply(s.name()), c);
             boolean better;
             if (best == null) better = true;
             else if (c.quantity().extreme == Quantity.Extreme.MAX) better = v.value > best.value;
