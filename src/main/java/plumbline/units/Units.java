@@ -1,6 +1,9 @@
 package plumbline.units;
 
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Matcher;
@@ -34,8 +37,12 @@ public final class Units {
         put("MN", f, 1e6);
         put("lbf", f, LBF_IN_N);
         put("lb", f, LBF_IN_N);
+        put("lbs", f, LBF_IN_N);
         put("kip", f, 1e3 * LBF_IN_N);
         put("kips", f, 1e3 * LBF_IN_N);
+        put("daN", f, 10.0);
+        put("kgf", f, 9.80665); // kilogram-force: standard gravity, exact (NIST SP 811, B.8)
+        put("tf", f, 9806.65); // tonne-force (metric ton-force), 1000 kgf
         put("mm", l, 1e-3);
         put("cm", l, 1e-2);
         put("m", l, 1.0);
@@ -58,6 +65,14 @@ public final class Units {
         put("K", Dimension.TEMPERATURE, 1.0);
         put("degF", Dimension.TEMPERATURE, 5.0 / 9.0);
     }
+
+    /**
+     * Whole words the trade writes for a product of symbols, read as that product: a moment
+     * written without its operator (kNm, Nmm, kNcm), and kip shortened to k next to a length
+     * (k-ft, ft-k, k-in; "k" alone is no unit, and never kelvin).
+     */
+    private static final Map<String, String> TRADE_WORDS = Map.of(
+            "kNm", "kN*m", "Nm", "N*m", "Nmm", "N*mm", "kNmm", "kN*mm", "kNcm", "kN*cm", "MNm", "MN*m");
 
     private static void put(String symbol, Dimension d, double factor) {
         SYMBOLS.put(symbol, new Unit(symbol, d, factor));
@@ -92,15 +107,21 @@ public final class Units {
         String p = part.trim();
         if (p.isEmpty()) throw new UnitParseException("unit '" + whole + "' has an empty part around '/'");
         Unit acc = new Unit("", Dimension.NONE, 1.0);
-        for (String term : p.split("[*.\\-\\u00b7](?![0-9])|\\s+")) {
+        String[] terms = p.split("[*.\\-\\u00b7](?![0-9])|\\s+");
+        for (String term : terms) {
             if (term.isEmpty()) throw new UnitParseException("unit '" + whole + "' has an empty factor");
+            if (TRADE_WORDS.containsKey(term)) {
+                acc = acc.times(product(TRADE_WORDS.get(term), whole));
+                continue;
+            }
             Matcher m = TERM.matcher(term);
             if (!m.matches()) throw new UnitParseException("unit '" + whole + "': cannot read '" + term + "'");
-            Unit base = SYMBOLS.get(m.group(1));
-            if (base == null) base = SYMBOLS.get(caseFold(m.group(1)));
+            // "k" is kip only beside another symbol (k-ft, ft-k): alone it is nothing, and never kelvin
+            Unit base = m.group(1).equals("k") && terms.length > 1 ? SYMBOLS.get("kip") : SYMBOLS.get(m.group(1));
+            if (base == null && !m.group(1).equals("k")) base = SYMBOLS.get(caseFold(m.group(1)));
             if (base == null) {
                 throw new UnitParseException("unknown unit symbol '" + m.group(1) + "' in '" + whole
-                        + "'; known: " + String.join(" ", SYMBOLS.keySet()));
+                        + "'; nearest known: " + String.join(", ", nearest(m.group(1))));
             }
             int power = 1;
             if (m.group(2) != null) power = Integer.parseInt(m.group(2));
@@ -111,6 +132,30 @@ public final class Units {
             acc = acc.times(base.power(power));
         }
         return acc;
+    }
+
+    /** The three known symbols (and trade words) nearest to {@code s} by edit distance, case ignored. */
+    static List<String> nearest(String s) {
+        List<String> all = new ArrayList<>(SYMBOLS.keySet());
+        all.addAll(TRADE_WORDS.keySet());
+        String low = s.toLowerCase(Locale.ROOT);
+        all.sort(Comparator.comparingInt((String k) -> distance(low, k.toLowerCase(Locale.ROOT))).thenComparing(k -> k));
+        return all.subList(0, 3);
+    }
+
+    private static int distance(String a, String b) {
+        int[] prev = new int[b.length() + 1], cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) prev[j] = j;
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + (a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1));
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
     }
 
     /** Accepts e.g. "KN" or "Kip" only where the fold is unambiguous (never mm against Mm). */

@@ -1,5 +1,7 @@
 package plumbline.units;
 
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
@@ -56,8 +58,9 @@ class UnitsTest {
 
     @Test
     void badUnitsAreRefusedWithTheSymbol() {
-        UnitParseException e = assertThrows(UnitParseException.class, () -> Units.parse("kNm"));
-        assertEquals(true, e.getMessage().contains("kNm"));
+        UnitParseException e = assertThrows(UnitParseException.class, () -> Units.parse("kNq"));
+        assertEquals(true, e.getMessage().contains("kNq"));
+
         assertThrows(UnitParseException.class, () -> Units.parse("kN/m/s"));
         assertThrows(UnitParseException.class, () -> Units.parseQuantity("twelve kN"));
     }
@@ -70,5 +73,39 @@ class UnitsTest {
         assertEquals(1.0, us.fromInternal(us.toInternal(1, Dimension.STRESS), Dimension.STRESS), 1e-15);
         assertEquals("kip*ft", us.symbol(Dimension.MOMENT));
         assertEquals("kip/ft2", us.symbol(Dimension.STRESS));
+    }
+
+    @Test
+    void unitsAsTheTradeWritesThem() throws Exception {
+        // NIST SP 811 (2008) Appendix B.8/B.9: ft*lbf = 1.355818 J, in*lbf = 0.1129848 J, lbf/ft = 14.59390 N/m,
+        // lbf/ft2 = 47.88026 Pa, kgf = 9.80665 N (exact)
+        assertEquals(1e3, Units.parse("kNm").toInternal(), 1e-9);
+        assertEquals(1e3, Units.parse("kN.m").toInternal(), 1e-9);
+        assertEquals(1e-3, Units.parse("Nmm").toInternal(), 1e-15);
+        assertEquals(1e-3, Units.parse("N.mm").toInternal(), 1e-15);
+        assertEquals(10, Units.parse("kNcm").toInternal(), 1e-12);
+        assertEquals(Dimension.MOMENT, Units.parse("kNcm").dimension());
+        assertEquals(10, Units.parse("daN").toInternal(), 1e-12);
+        assertEquals(9.80665, Units.parse("kgf").toInternal(), 1e-12);
+        assertEquals(9806.65, Units.parse("tf").toInternal(), 1e-9);
+        assertEquals(1355.818, Units.parse("k-ft").toInternal(), 1e-3);
+        assertEquals(1355.818, Units.parse("ft-k").toInternal(), 1e-3);
+        assertEquals(1355.818, Units.parse("ft-kip").toInternal(), 1e-3);
+        assertEquals(112.9848, Units.parse("k-in").toInternal(), 1e-4);
+        assertEquals(112.9848, Units.parse("in-kip").toInternal(), 1e-4);
+        assertEquals(Dimension.MOMENT, Units.parse("k-ft").dimension());
+        assertEquals(14593.90, Units.parse("klf").toInternal(), 1e-2);
+        assertEquals(14.59390, Units.parse("plf").toInternal(), 1e-5);
+        assertEquals(47880.26, Units.parse("ksf").toInternal(), 1e-2);
+        assertEquals(4.448222, Units.parse("lb").toInternal(), 1e-6);
+        assertEquals(4.448222, Units.parse("lbs").toInternal(), 1e-6);
+    }
+
+    @Test
+    void kAloneIsNoUnitAndNeverKelvin() {
+        UnitParseException e = assertThrows(UnitParseException.class, () -> Units.parse("k"));
+        assertTrue(e.getMessage().contains("nearest known"), e.getMessage());
+        UnitParseException near = assertThrows(UnitParseException.class, () -> Units.parse("kNmx"));
+        assertTrue(near.getMessage().contains("nearest known: kNm"), near.getMessage());
     }
 }
