@@ -1,9 +1,5 @@
 package plumbline.io;
 
-import com.fasterxml.jackson.databind.MappingIterator;
-import com.fasterxml.jackson.dataformat.csv.CsvMapper;
-import com.fasterxml.jackson.dataformat.csv.CsvParser;
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -16,9 +12,7 @@ import plumbline.model.InputException;
 import plumbline.model.Model;
 import plumbline.model.Problem;
 import plumbline.model.Quantity;
-import plumbline.model.SourceRef;
 import plumbline.units.Dimension;
-import plumbline.units.Unit;
 import plumbline.units.UnitParseException;
 import plumbline.units.UnitSystem;
 import plumbline.units.Units;
@@ -42,7 +36,7 @@ public final class ClaimsReader {
         List<Problem> problems = new ArrayList<>();
         ClaimSet cs;
         if (name.toLowerCase(Locale.ROOT).endsWith(".csv")) {
-            cs = csv(name, text, model, problems);
+            cs = CsvClaims.read(name, text, model, problems);
         } else {
             Tree root = TreeReader.read(name, text, ModelReader.isYaml(name));
             Fields top = Fields.of(root, "", problems, List.of("claims"), "a map with the single key 'claims:'");
@@ -60,7 +54,21 @@ public final class ClaimsReader {
         Fields f = Fields.of(t, path, problems, List.of("source", "units", "tolerance", "reactions", "members",
                 "displacements"), "a map with source, units, tolerance, reactions, members, displacements");
         if (f == null) return null;
-        String source = f.get("source") instanceof Tree.Scalar sc && sc.kind() == Tree.Scalar.Kind.NULL ? null
+        Heading h = heading(f, model, problems);
+        List<Claim> claims = new ArrayList<>();
+        section(f, "reactions", Claim.Kind.REACTION, "node", h.units, problems, claims);
+        section(f, "members", Claim.Kind.MEMBER, "member", h.units, problems, claims);
+        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", h.units, problems, claims);
+        return new ClaimSet(file, h.source, h.tolerances, claims);
+    }
+
+    /** What a claims file says of all its claims: where they come from, their units, their tolerances. */
+    record Heading(String source, UnitSystem units, Map<String, Double> tolerances) {
+    }
+
+    /** Reads the {@code source}, {@code units} and {@code tolerance} keys of {@code f} (the model's units by default). */
+    static Heading heading(Fields f, Model model, List<Problem> problems) {
+        String source = !f.has("source") || f.get("source") instanceof Tree.Scalar sc && sc.kind() == Tree.Scalar.Kind.NULL ? null
                 : f.text("source", false, "free text");
         UnitSystem units = model.units();
         if (f.has("units")) {
@@ -69,21 +77,24 @@ public final class ClaimsReader {
         }
         Map<String, Double> tol = new LinkedHashMap<>();
         if (f.has("tolerance")) {
-            Fields tf = Fields.of(f.get("tolerance"), f.field("tolerance"), problems, TOLERANCE_KEYS,
-                    "a map such as {default: 3%, deflection: 10%}");
-            if (tf != null) {
-                for (Tree.Entry e : tf.map.entries().values()) {
-                    if (!TOLERANCE_KEYS.contains(e.key())) continue;
-                    double v = tolerance(e.value(), tf.field(e.key()), problems);
-                    if (!Double.isNaN(v)) tol.put(e.key(), v);
+            Tree tt = f.get("tolerance");
+            if (tt instanceof Tree.Scalar) {
+                // one tolerance for every claim of the file: its default
+                double v = tolerance(tt, f.field("tolerance"), problems);
+                if (!Double.isNaN(v)) tol.put("default", v);
+            } else {
+                Fields tf = Fields.of(tt, f.field("tolerance"), problems, TOLERANCE_KEYS,
+                        "a map such as {default: 3%, deflection: 10%}");
+                if (tf != null) {
+                    for (Tree.Entry e : tf.map.entries().values()) {
+                        if (!TOLERANCE_KEYS.contains(e.key())) continue;
+                        double v = tolerance(e.value(), tf.field(e.key()), problems);
+                        if (!Double.isNaN(v)) tol.put(e.key(), v);
+                    }
                 }
             }
         }
-        List<Claim> claims = new ArrayList<>();
-        section(f, "reactions", Claim.Kind.REACTION, "node", units, problems, claims);
-        section(f, "members", Claim.Kind.MEMBER, "member", units, problems, claims);
-        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", units, problems, claims);
-        return new ClaimSet(file, source == null ? "" : source, tol, claims);
+        return new Heading(source == null ? "" : source, units, tol);
     }
 
     /** A relative tolerance written as "3%" or as a fraction 0.03. */
@@ -155,101 +166,5 @@ public final class ClaimsReader {
                         + String.join(", ", quantities)));
             }
         }
-    }
-
-    private static ClaimSet csv(String file, String text, Model model, List<Problem> problems) {
-        CsvMapper mapper = new CsvMapper();
-        mapper.enable(CsvParser.Feature.WRAP_AS_ARRAY);
-        List<Claim> claims = new ArrayList<>();
-        UnitSystem units = model.units();
-        try (MappingIterator<String[]> it = mapper.readerFor(String[].class).readValues(text)) {
-            if (!it.hasNext()) {
-                problems.add(new Problem(new SourceRef(file, 1, 1), "(header)", "empty file; expected the header item,combo,name,quantity,value,unit"));
-                return null;
-            }
-            String[] header = it.next();
-            List<String> expected = List.of("item", "combo", "name", "quantity", "value", "unit");
-            List<String> got = new ArrayList<>();
-            for (String h : header) got.add(h.trim());
-            if (!got.equals(expected)) {
-                problems.add(new Problem(new SourceRef(file, 1, 1), "(header)", "header is '" + String.join(",", got)
-                        + "'; expected item,combo,name,quantity,value,unit"));
-                return null;
-            }
-            while (it.hasNext()) {
-                int line = it.getCurrentLocation().getLineNr();
-                String[] row;
-                try {
-                    row = it.next();
-                } catch (RuntimeException e) {
-                    problems.add(new Problem(new SourceRef(file, line, 1), "(row)", "cannot read the row: " + e.getMessage()));
-                    break;
-                }
-                line = Math.max(1, it.getCurrentLocation().getLineNr() - 1);
-                if (row.length == 1 && row[0].isBlank()) continue;
-                SourceRef at = new SourceRef(file, line, 1);
-                if (row.length < 5 || row.length > 6) {
-                    problems.add(new Problem(at, "(row)", "row has " + row.length + " fields; expected 6: item,combo,name,quantity,value,unit"));
-                    continue;
-                }
-                String item = row[0].trim(), combo = row[1].trim(), name = row[2].trim(), q = row[3].trim();
-                String unitText = row.length > 5 ? row[5].trim() : "";
-                Claim.Kind kind = switch (item) {
-                    case "reaction" -> Claim.Kind.REACTION;
-                    case "member" -> Claim.Kind.MEMBER;
-                    case "displacement" -> Claim.Kind.DISPLACEMENT;
-                    default -> null;
-                };
-                if (kind == null) {
-                    problems.add(new Problem(at, "item", "found '" + item + "'; expected reaction, member or displacement"));
-                    continue;
-                }
-                List<String> qs = Quantity.symbols(kind);
-                Quantity quantity = Quantity.of(kind, q);
-                if (quantity == null) {
-                problems.add(new Problem(at, "quantity", Fields.unknown(item + " quantity", q, qs,
-                        "expected one of " + String.join(", ", qs))));
-                    continue;
-                }
-                if (combo.isEmpty() || name.isEmpty()) {
-                    problems.add(new Problem(at, combo.isEmpty() ? "combo" : "name", "empty; expected a name"));
-                    continue;
-                }
-                Dimension d = quantity.dimension;
-                double value;
-                try {
-                    value = Double.parseDouble(row[4].trim());
-                    if (!Double.isFinite(value)) throw new NumberFormatException();
-                } catch (NumberFormatException e) {
-                    problems.add(new Problem(at, "value", "'" + row[4] + "' is not a finite number"));
-                    continue;
-                }
-                double si;
-                String unitShown;
-                if (unitText.isEmpty()) {
-                    si = units.toInternal(value, d);
-                    unitShown = units.symbol(d);
-                } else {
-                    try {
-                        Unit u = Units.parse(unitText);
-                        if (!u.dimension().matchesIgnoringAngle(d)) {
-                problems.add(new Problem(at, "unit", "unit '" + unitText + "' is " + u.dimension().describe()
-                                    + "; expected " + d.describe()));
-                            continue;
-                        }
-                        si = u.toInternal(value);
-                        unitShown = unitText;
-                    } catch (UnitParseException e) {
-                problems.add(new Problem(at, "unit", e.getMessage()));
-                        continue;
-                    }
-                }
-                claims.add(new Claim(kind, name, combo, quantity, si, value, unitShown, Double.NaN, at));
-            }
-        } catch (IOException | RuntimeException e) {
-            problems.add(new Problem(new SourceRef(file, 0, 0), "(file)", "cannot read as CSV: " + e.getMessage()));
-            return null;
-        }
-        return new ClaimSet(file, "", Map.of(), claims);
     }
 }

@@ -1,0 +1,219 @@
+package plumbline.io;
+
+import com.fasterxml.jackson.databind.MappingIterator;
+import com.fasterxml.jackson.dataformat.csv.CsvMapper;
+import com.fasterxml.jackson.dataformat.csv.CsvParser;
+import com.fasterxml.jackson.dataformat.csv.CsvSchema;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import plumbline.model.Claim;
+import plumbline.model.ClaimSet;
+import plumbline.model.InputException;
+import plumbline.model.Model;
+import plumbline.model.Problem;
+import plumbline.model.Quantity;
+import plumbline.model.SourceRef;
+import plumbline.units.Dimension;
+import plumbline.units.Unit;
+import plumbline.units.UnitParseException;
+import plumbline.units.UnitSystem;
+import plumbline.units.Units;
+
+/**
+ * Reads a CSV claims file as spreadsheets export it (format reference section 4.1): lines
+ * before the header that start with {@code #} carry {@code source:}, {@code units:} and
+ * {@code tolerance:} as in YAML; the header names the columns in any order, matched
+ * case-insensitively with spaces trimmed ({@code item, combo, name, quantity, value}, and
+ * optionally {@code unit} and {@code tolerance}); a header separated by {@code ;} means
+ * {@code ;} between fields and a decimal comma in numbers; rows that are empty or hold only
+ * separators are skipped.
+ */
+final class CsvClaims {
+
+    static final List<String> REQUIRED = List.of("item", "combo", "name", "quantity", "value");
+    static final List<String> OPTIONAL = List.of("unit", "tolerance");
+
+    private CsvClaims() {
+    }
+
+    static ClaimSet read(String file, String text, Model model, List<Problem> problems) {
+        String[] lines = text.split("\r?\n", -1);
+        // the preamble: '#' lines (and blank ones) before the header, read as YAML with their own line numbers
+        StringBuilder yaml = new StringBuilder(), rows = new StringBuilder();
+        int headerLine = -1;
+        for (int i = 0; i < lines.length; i++) {
+            String t = lines[i].trim();
+            boolean preamble = headerLine < 0 && (t.isEmpty() || t.startsWith("#"));
+            yaml.append(preamble && t.startsWith("#") ? t.substring(1).trim() : "").append('\n');
+            rows.append(preamble ? "" : lines[i]).append('\n');
+            if (!preamble && headerLine < 0) headerLine = i + 1;
+        }
+        ClaimsReader.Heading heading = new ClaimsReader.Heading("", model.units(), Map.of());
+        if (!yaml.toString().isBlank()) {
+            Tree t = null;
+            try {
+                t = TreeReader.read(file, yaml.toString(), true);
+            } catch (InputException e) {
+                problems.addAll(e.problems());
+            }
+            Fields f = t == null ? null : Fields.of(t, "", problems, List.of("source", "units", "tolerance"),
+                    "'# key: value' lines (source, units, tolerance) before the header");
+            if (f != null) heading = ClaimsReader.heading(f, model, problems);
+        }
+        if (headerLine < 0) {
+            problems.add(new Problem(new SourceRef(file, 1, 1), "(header)",
+                    "no header; expected a line such as item,combo,name,quantity,value,unit"));
+            return null;
+        }
+        char sep = lines[headerLine - 1].contains(";") ? ';' : ',';
+        boolean decimalComma = sep == ';';
+        List<Claim> claims = new ArrayList<>();
+        UnitSystem units = heading.units();
+        CsvMapper mapper = new CsvMapper();
+        mapper.enable(CsvParser.Feature.WRAP_AS_ARRAY);
+        CsvSchema schema = CsvSchema.emptySchema().withColumnSeparator(sep);
+        try (MappingIterator<String[]> it = mapper.readerFor(String[].class).with(schema).readValues(rows.toString())) {
+            Map<String, Integer> columns = null;
+            while (it.hasNext()) {
+                String[] row;
+                try {
+                    row = it.next();
+                } catch (RuntimeException e) {
+                    problems.add(new Problem(new SourceRef(file, it.getCurrentLocation().getLineNr(), 1), "(row)",
+                            "cannot read the row: " + e.getMessage()));
+                    break;
+                }
+                int line = Math.max(1, it.getCurrentLocation().getLineNr() - 1);
+                if (blank(row)) continue;
+                SourceRef at = new SourceRef(file, line, 1);
+                if (columns == null) {
+                    columns = header(row, at, problems);
+                    if (columns == null) return null;
+                    continue;
+                }
+                Claim c = claim(row, columns, at, units, decimalComma, problems);
+                if (c != null) claims.add(c);
+            }
+        } catch (IOException | RuntimeException e) {
+            problems.add(new Problem(new SourceRef(file, 0, 0), "(file)", "cannot read as CSV: " + e.getMessage()));
+            return null;
+        }
+        return new ClaimSet(file, heading.source(), heading.tolerances(), claims);
+    }
+
+    private static boolean blank(String[] row) {
+        for (String f : row) if (!f.isBlank()) return false;
+        return true;
+    }
+
+    /** Column name to index; a problem for a missing, unknown or repeated column. */
+    private static Map<String, Integer> header(String[] row, SourceRef at, List<Problem> problems) {
+        Map<String, Integer> out = new LinkedHashMap<>();
+        List<String> known = new ArrayList<>(REQUIRED);
+        known.addAll(OPTIONAL);
+        int before = problems.size();
+        for (int i = 0; i < row.length; i++) {
+            String h = row[i].trim().toLowerCase(Locale.ROOT);
+            if (h.isEmpty() && i == row.length - 1) continue; // a trailing separator
+            if (!known.contains(h)) {
+                problems.add(new Problem(at, "(header)", Fields.unknown("column", row[i].trim(), known,
+                        "expected the columns " + String.join(",", REQUIRED) + " and optionally " + String.join(",", OPTIONAL))));
+            } else if (out.put(h, i) != null) {
+                problems.add(new Problem(at, "(header)", "column '" + h + "' given twice"));
+            }
+        }
+        for (String r : REQUIRED) {
+            if (!out.containsKey(r)) {
+                problems.add(new Problem(at, "(header)", "no column '" + r + "'; expected the columns "
+                        + String.join(",", REQUIRED) + " (any order, any case) and optionally " + String.join(",", OPTIONAL)));
+            }
+        }
+        return problems.size() == before ? out : null;
+    }
+
+    private static String field(String[] row, Map<String, Integer> columns, String name) {
+        Integer i = columns.get(name);
+        return i == null || i >= row.length ? "" : row[i].trim();
+    }
+
+    private static Claim claim(String[] row, Map<String, Integer> columns, SourceRef at, UnitSystem units,
+                               boolean decimalComma, List<Problem> problems) {
+        String item = field(row, columns, "item").toLowerCase(Locale.ROOT), combo = field(row, columns, "combo"),
+                name = field(row, columns, "name"), q = field(row, columns, "quantity"), unitText = field(row, columns, "unit"),
+                valueText = field(row, columns, "value"), tolText = field(row, columns, "tolerance");
+        Claim.Kind kind = switch (item) {
+            case "reaction" -> Claim.Kind.REACTION;
+            case "member" -> Claim.Kind.MEMBER;
+            case "displacement" -> Claim.Kind.DISPLACEMENT;
+            default -> null;
+        };
+        if (kind == null) {
+            problems.add(new Problem(at, "item", "found '" + item + "'; expected reaction, member or displacement"));
+            return null;
+        }
+        List<String> qs = Quantity.symbols(kind);
+        Quantity quantity = Quantity.of(kind, q);
+        if (quantity == null) {
+            problems.add(new Problem(at, "quantity", Fields.unknown(item + " quantity", q, qs,
+                    "expected one of " + String.join(", ", qs))));
+            return null;
+        }
+        if (combo.isEmpty() || name.isEmpty()) {
+            problems.add(new Problem(at, combo.isEmpty() ? "combo" : "name", "empty; expected a name"));
+            return null;
+        }
+        double value = number(valueText, decimalComma);
+        if (!Double.isFinite(value)) {
+            problems.add(new Problem(at, "value", "'" + valueText + "' is not a finite number"
+                    + (decimalComma ? " (a ';' file may use a decimal comma: 12,5)" : "")));
+            return null;
+        }
+        double tolerance = Double.NaN;
+        if (!tolText.isEmpty()) {
+            String t = tolText.endsWith("%") ? tolText.substring(0, tolText.length() - 1).trim() : tolText;
+            double v = number(t, decimalComma);
+            if (tolText.endsWith("%")) v /= 100;
+            if (!(v >= 0 && v < 1)) {
+                problems.add(new Problem(at, "tolerance", "'" + tolText + "' is not a relative tolerance; expected e.g. 3% or 0.03"));
+                return null;
+            }
+            tolerance = v;
+        }
+        Dimension d = quantity.dimension;
+        if (quantity == Quantity.DEFLECTION && value < 0) {
+            problems.add(new Problem(at, "value", "a deflection is a magnitude; expected a value >= 0"));
+            return null;
+        }
+        if (unitText.isEmpty()) {
+            return new Claim(kind, name, combo, quantity, units.toInternal(value, d), value, units.symbol(d), tolerance, at);
+        }
+        try {
+            Unit u = Units.parse(unitText);
+            if (!u.dimension().matchesIgnoringAngle(d)) {
+                problems.add(new Problem(at, "unit", "unit '" + unitText + "' is " + u.dimension().describe()
+                        + "; expected " + d.describe()));
+                return null;
+            }
+            return new Claim(kind, name, combo, quantity, u.toInternal(value), value, unitText, tolerance, at);
+        } catch (UnitParseException e) {
+            problems.add(new Problem(at, "unit", e.getMessage()));
+            return null;
+        }
+    }
+
+    /** A number as written, with a decimal comma where the file uses ';' between fields; NaN if it is none. */
+    private static double number(String text, boolean decimalComma) {
+        String t = text.trim().replace(" ", "");
+        if (decimalComma) t = t.replace(',', '.');
+        try {
+            double v = Double.parseDouble(t);
+            return Double.isFinite(v) ? v : Double.NaN;
+        } catch (NumberFormatException e) {
+            return Double.NaN;
+        }
+    }
+}
