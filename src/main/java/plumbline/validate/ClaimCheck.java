@@ -2,7 +2,10 @@ package plumbline.validate;
 
 import java.util.ArrayList;
 import java.util.Collection;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
 import plumbline.model.Model;
@@ -17,10 +20,26 @@ public final class ClaimCheck {
     private ClaimCheck() {
     }
 
+    /**
+     * Two claims of the same quantity at the same place under the same load set whose values
+     * differ by more than this fraction of the larger contradict each other (rounding aside).
+     */
+    public static final double CONTRADICTION = 1e-9;
+
     public static List<Problem> check(Model m, Collection<String> loadSets, boolean hasCombinations) {
         List<Problem> out = new ArrayList<>();
+        Map<String, Claim> first = new HashMap<>();
         for (ClaimSet cs : m.claims()) {
             for (Claim c : cs.claims()) {
+                Claim before = first.putIfAbsent(c.id(), c);
+                if (before != null && Math.abs(before.valueInternal() - c.valueInternal())
+                        > CONTRADICTION * Math.max(Math.abs(before.valueInternal()), Math.abs(c.valueInternal()))) {
+                    out.add(new Problem(c.at(), c.item().word + " " + c.name() + " " + c.quantity() + " " + c.combo(),
+                            String.format(Locale.ROOT, "claimed %.6g %s here and %.6g %s at %s:%d; expected one value per "
+                                    + "quantity (remove one of the two lines)", m.units().fromInternal(c.valueInternal(), c.dimension()),
+                                    m.units().symbol(c.dimension()), m.units().fromInternal(before.valueInternal(), c.dimension()),
+                                    m.units().symbol(c.dimension()), before.at().file(), before.at().line())));
+                }
                 String field = c.item().word + " " + c.name() + " " + c.quantity();
                 switch (c.item()) {
                     case REACTION -> {
