@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
+import plumbline.model.Conventions;
 import plumbline.model.InputException;
 import plumbline.model.Model;
 import plumbline.model.Problem;
@@ -51,19 +52,39 @@ public final class ClaimsReader {
     }
 
     static ClaimSet claimSet(Tree t, String file, String path, List<Problem> problems, Model model) {
-        Fields f = Fields.of(t, path, problems, List.of("source", "units", "tolerance", "reactions", "members",
-                "displacements"), "a map with source, units, tolerance, reactions, members, displacements");
+        Fields f = Fields.of(t, path, problems, List.of("source", "units", "tolerance", "conventions", "reactions", "members",
+                "displacements"), "a map with source, units, tolerance, conventions, reactions, members, displacements");
         if (f == null) return null;
         Heading h = heading(f, model, problems);
         List<Claim> claims = new ArrayList<>();
-        section(f, "reactions", Claim.Kind.REACTION, "node", h.units, problems, claims);
-        section(f, "members", Claim.Kind.MEMBER, "member", h.units, problems, claims);
-        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", h.units, problems, claims);
+        section(f, "reactions", Claim.Kind.REACTION, "node", h, problems, claims);
+        section(f, "members", Claim.Kind.MEMBER, "member", h, problems, claims);
+        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", h, problems, claims);
         return new ClaimSet(file, h.source, h.tolerances, claims);
     }
 
-    /** What a claims file says of all its claims: where they come from, their units, their tolerances. */
-    record Heading(String source, UnitSystem units, Map<String, Double> tolerances) {
+    /** What a claims file says of all its claims: where they come from, their units, tolerances and sign conventions. */
+    record Heading(String source, UnitSystem units, Map<String, Double> tolerances, Conventions conventions) {
+    }
+
+    /** The {@code conventions} map: reactions on-structure/on-support, moment sagging/hogging-positive, axial tension/compression-positive. */
+    static Conventions conventions(Fields f, List<Problem> problems) {
+        if (!f.has("conventions")) return Conventions.TOOL;
+        Fields c = Fields.of(f.get("conventions"), f.field("conventions"), problems, List.of("reactions", "moment", "axial"),
+                "a map such as {reactions: on-support, moment: hogging-positive, axial: compression-positive}");
+        if (c == null) return Conventions.TOOL;
+        return new Conventions(choice(c, "reactions", "on-structure", "on-support"),
+                choice(c, "moment", "sagging-positive", "hogging-positive"),
+                choice(c, "axial", "tension-positive", "compression-positive"));
+    }
+
+    /** False for the tool's word (or no key), true for the other; a problem for anything else. */
+    private static boolean choice(Fields c, String key, String tools, String other) {
+        String v = c.text(key, false, tools + " or " + other);
+        if (v == null || v.equals(tools)) return false;
+        if (v.equals(other)) return true;
+        c.problem(c.at(key), key, "found '" + v + "'; expected " + tools + " (the default) or " + other);
+        return false;
     }
 
     /** Reads the {@code source}, {@code units} and {@code tolerance} keys of {@code f} (the model's units by default). */
@@ -94,7 +115,7 @@ public final class ClaimsReader {
                 }
             }
         }
-        return new Heading(source == null ? "" : source, units, tol);
+        return new Heading(source == null ? "" : source, units, tol, conventions(f, problems));
     }
 
     /** A relative tolerance written as "3%" or as a fraction 0.03. */
@@ -115,8 +136,9 @@ public final class ClaimsReader {
         return Double.NaN;
     }
 
-    private static void section(Fields f, String key, Claim.Kind kind, String nameKey, UnitSystem units,
+    private static void section(Fields f, String key, Claim.Kind kind, String nameKey, Heading h,
                                 List<Problem> problems, List<Claim> out) {
+        UnitSystem units = h.units();
         List<String> quantities = Quantity.symbols(kind);
         List<Tree> items = f.list(key, false, "a list of claims");
         for (int i = 0; i < items.size(); i++) {
@@ -158,7 +180,7 @@ public final class ClaimsReader {
                     g.problem(v.at(), q, "a deflection is a magnitude; expected a value >= 0");
                 }
                 if (name != null && combo != null && !Double.isNaN(si)) {
-                    out.add(new Claim(kind, name, combo, quantity, si, written, unit, tol, g.at(q)));
+                    out.add(Claim.inConvention(h.conventions(), kind, name, combo, quantity, si, written, unit, tol, g.at(q)));
                 }
             }
             if (n == 0 && blank == 0) {

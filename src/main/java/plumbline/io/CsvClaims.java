@@ -12,6 +12,7 @@ import java.util.Locale;
 import java.util.Map;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
+import plumbline.model.Conventions;
 import plumbline.model.InputException;
 import plumbline.model.Model;
 import plumbline.model.Problem;
@@ -26,7 +27,7 @@ import plumbline.units.Units;
 /**
  * Reads a CSV claims file as spreadsheets export it (format reference section 4.1): lines
  * before the header that start with {@code #} carry {@code source:}, {@code units:} and
- * {@code tolerance:} as in YAML; the header names the columns in any order, matched
+ * {@code tolerance:} and {@code conventions:} as in YAML; the header names the columns in any order, matched
  * case-insensitively with spaces trimmed ({@code item, combo, name, quantity, value}, and
  * optionally {@code unit} and {@code tolerance}); a header separated by {@code ;} means
  * {@code ;} between fields and a decimal comma in numbers; rows that are empty or hold only
@@ -52,7 +53,7 @@ final class CsvClaims {
             rows.append(preamble ? "" : lines[i]).append('\n');
             if (!preamble && headerLine < 0) headerLine = i + 1;
         }
-        ClaimsReader.Heading heading = new ClaimsReader.Heading("", model.units(), Map.of());
+        ClaimsReader.Heading heading = new ClaimsReader.Heading("", model.units(), Map.of(), Conventions.TOOL);
         if (!yaml.toString().isBlank()) {
             Tree t = null;
             try {
@@ -60,8 +61,8 @@ final class CsvClaims {
             } catch (InputException e) {
                 problems.addAll(e.problems());
             }
-            Fields f = t == null ? null : Fields.of(t, "", problems, List.of("source", "units", "tolerance"),
-                    "'# key: value' lines (source, units, tolerance) before the header");
+            Fields f = t == null ? null : Fields.of(t, "", problems, List.of("source", "units", "tolerance", "conventions"),
+                    "'# key: value' lines (source, units, tolerance, conventions) before the header");
             if (f != null) heading = ClaimsReader.heading(f, model, problems);
         }
         if (headerLine < 0) {
@@ -95,7 +96,7 @@ final class CsvClaims {
                     if (columns == null) return null;
                     continue;
                 }
-                Claim c = claim(row, columns, at, units, decimalComma, problems);
+                Claim c = claim(row, columns, at, heading, decimalComma, problems);
                 if (c != null) claims.add(c);
             }
         } catch (IOException | RuntimeException e) {
@@ -140,8 +141,9 @@ final class CsvClaims {
         return i == null || i >= row.length ? "" : row[i].trim();
     }
 
-    private static Claim claim(String[] row, Map<String, Integer> columns, SourceRef at, UnitSystem units,
+    private static Claim claim(String[] row, Map<String, Integer> columns, SourceRef at, ClaimsReader.Heading heading,
                                boolean decimalComma, List<Problem> problems) {
+        UnitSystem units = heading.units();
         String item = field(row, columns, "item").toLowerCase(Locale.ROOT), combo = field(row, columns, "combo"),
                 name = field(row, columns, "name"), q = field(row, columns, "quantity"), unitText = field(row, columns, "unit"),
                 valueText = field(row, columns, "value"), tolText = field(row, columns, "tolerance");
@@ -189,7 +191,8 @@ final class CsvClaims {
             return null;
         }
         if (unitText.isEmpty()) {
-            return new Claim(kind, name, combo, quantity, units.toInternal(value, d), value, units.symbol(d), tolerance, at);
+            return Claim.inConvention(heading.conventions(), kind, name, combo, quantity, units.toInternal(value, d), value,
+                    units.symbol(d), tolerance, at);
         }
         try {
             Unit u = Units.parse(unitText);
@@ -198,7 +201,8 @@ final class CsvClaims {
                         + "; expected " + d.describe()));
                 return null;
             }
-            return new Claim(kind, name, combo, quantity, u.toInternal(value), value, unitText, tolerance, at);
+            return Claim.inConvention(heading.conventions(), kind, name, combo, quantity, u.toInternal(value), value, unitText,
+                    tolerance, at);
         } catch (UnitParseException e) {
             problems.add(new Problem(at, "unit", e.getMessage()));
             return null;

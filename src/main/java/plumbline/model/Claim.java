@@ -7,9 +7,27 @@ import plumbline.units.Dimension;
  * combination (or load case, or {@code envelope}). {@code valueInternal} is in SI; the
  * written value and unit are kept for the report and for the diagnosis of unit slips.
  * {@code toleranceOverride} is a relative tolerance given on the claim itself, NaN if none.
+ * {@code quantity} and {@code valueInternal} are in the tool's sign convention; a claim copied
+ * from a source with another ({@link Conventions}) keeps what it was written as in
+ * {@code writtenQuantity}, {@code writtenValue} and {@code convention} (its words, "" when the
+ * tool's convention held).
  */
 public record Claim(Kind item, String name, String combo, Quantity quantity, double valueInternal,
-                    double writtenValue, String writtenUnit, double toleranceOverride, SourceRef at) {
+                    double writtenValue, String writtenUnit, double toleranceOverride, SourceRef at,
+                    Quantity writtenQuantity, String convention) {
+
+    /** A claim written in the tool's own sign convention. */
+    public Claim(Kind item, String name, String combo, Quantity quantity, double valueInternal, double writtenValue,
+                 String writtenUnit, double toleranceOverride, SourceRef at) {
+        this(item, name, combo, quantity, valueInternal, writtenValue, writtenUnit, toleranceOverride, at, quantity, "");
+    }
+
+    /** The claim as the source gave it, turned into the tool's sign convention ({@code value} in SI, as written). */
+    public static Claim inConvention(Conventions k, Kind item, String name, String combo, Quantity written, double siAsWritten,
+                                     double writtenValue, String writtenUnit, double toleranceOverride, SourceRef at) {
+        return new Claim(item, name, combo, k.toolQuantity(written), k.toolSign(written) * siAsWritten, writtenValue, writtenUnit,
+                toleranceOverride, at, written, k.applying(written));
+    }
 
     public enum Kind {
         REACTION("reaction"), MEMBER("member"), DISPLACEMENT("displacement");
@@ -27,6 +45,6 @@ public record Claim(Kind item, String name, String combo, Quantity quantity, dou
 
     public String id() {
         String prefix = item == Kind.REACTION ? "R" : item == Kind.MEMBER ? "M" : "D";
-        return prefix + "-" + name + "-" + combo + "-" + quantity;
+        return prefix + "-" + name + "-" + combo + "-" + writtenQuantity;
     }
 }

@@ -106,7 +106,8 @@ public final class Console {
                         c.status() == ClaimResult.Status.OK && c.relativeDifference() > c.tolerance().relative()
                                 ? "under the absolute floor" : pct(c.relativeDifference()),
                         pct(c.tolerance().relative()));
-                sb.append(wrap(line, "         "));
+                String written = asWritten(cl, u);
+                sb.append(wrap(line + (written.isEmpty() ? "" : " [" + written + "]"), "         "));
                 if (c.explanation() > 0) {
                     sb.append(wrap("         likely: E" + c.explanation() + " below" + (c.ownDiagnosis() == null ? ""
                             : "; this claim alone: " + c.ownDiagnosis()), "         "));
@@ -221,6 +222,19 @@ public final class Console {
         return String.format(Locale.ROOT, "%.3e", v);
     }
 
+
+    /**
+     * The claim as its source wrote it, where that differs from how it is compared: another
+     * unit ("as written: 6.744 kip") or another sign convention ("as written: M_max 30 kN*m,
+     * moments hogging-positive"); "" when it was written as compared.
+     */
+    public static String asWritten(Claim c, UnitSystem u) {
+        boolean otherUnit = !c.writtenUnit().equals(u.symbol(c.dimension()));
+        if (c.convention().isEmpty() && !otherUnit) return "";
+        if (!Double.isFinite(c.writtenValue())) return c.convention().isEmpty() ? "" : "as written: " + c.convention();
+        String v = fmt(c.writtenValue()) + " " + c.writtenUnit();
+        return c.convention().isEmpty() ? "as written: " + v : "as written: " + c.writtenQuantity() + " " + v + ", " + c.convention();
+    }
 
     /**
      * The explanations of the claim set, best first, each with the claims that support it;

@@ -441,7 +441,9 @@ public final class PdfReport {
                 String mark = c.status() == ClaimResult.Status.MISMATCH ? "!!" : c.status() == ClaimResult.Status.MARGINAL ? "?" : "";
                 t.addCell(cell(mark, f, shade));
                 t.addCell(cell(c.claim().item().word + " " + c.claim().name() + " " + c.claim().quantity(), f, shade));
-                t.addCell(cell(value(u, c.claim().valueInternal(), c.claim().dimension()), f, shade));
+                String written = Console.asWritten(c.claim(), u);
+                t.addCell(cell(value(u, c.claim().valueInternal(), c.claim().dimension()) + (written.isEmpty() ? "" : "\n(" + written + ")"),
+                        f, shade));
                 t.addCell(cell(value(u, c.computed(), c.claim().dimension()), f, shade));
                 t.addCell(cell(Double.isFinite(c.computedForce()) ? value(u, c.computedForce(), c.claim().dimension()) : "not run", f, shade));
                 t.addCell(cell(Console.pct(c.relativeDifference()), f, shade));

@@ -265,11 +265,15 @@ public final class ResultsTree {
         o.put("combo", c.combo());
         o.put("item", c.item().word);
         o.put("name", c.name());
-        o.put("quantity", c.quantity().symbol);
+        o.put("quantity", c.writtenQuantity().symbol);
+        // in another sign convention a claim is compared as the tool's quantity (hogging M_max is -M_min)
+        if (c.writtenQuantity() != c.quantity()) o.put("compared_as", c.quantity().symbol);
         o.put("claimed", out(u, c.valueInternal(), c.dimension()));
         o.put("computed", out(u, r.computed(), c.dimension()));
         o.put("computed_force_method", out(u, r.computedForce(), c.dimension()));
         o.put("written", map("value", num(c.writtenValue()), "unit", c.writtenUnit()));
+        o.put("claimed_as_written", map("quantity", c.writtenQuantity().symbol, "value", num(c.writtenValue()), "unit", c.writtenUnit(),
+                "convention", c.convention().isEmpty() ? "the tool's" : c.convention()));
         o.put("relative_difference", num(r.relativeDifference()));
         o.put("status", r.status().word);
         o.put("tolerance", num(r.tolerance().relative()));

@@ -110,4 +110,15 @@ class CsvClaimsTest {
         assertEquals(List.of(30e3), read("item,combo,name,quantity,value,unit\nreaction,D,A,Fy,30,kN\n").claims().stream()
                 .map(Claim::valueInternal).toList());
     }
+
+    @Test
+    void conventionsBeforeTheHeader() throws Exception {
+        ClaimSet cs = read("# conventions: {reactions: on-support}\nitem,combo,name,quantity,value\nreaction,D,A,Fy,-30\n");
+        assertEquals(30e3, cs.claims().get(0).valueInternal(), 1e-9);
+        assertEquals("reactions on the supports", cs.claims().get(0).convention());
+        InputException e = assertThrows(InputException.class, () -> read("# conventions: {moment: hogging}\nitem,combo,name,quantity,value\n"));
+        assertTrue(e.problems().get(0).message().contains("expected sagging-positive (the default) or hogging-positive"),
+                e.problems().toString());
+        assertEquals(1, e.problems().get(0).at().line());
+    }
 }
