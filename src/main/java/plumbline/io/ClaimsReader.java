@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.regex.Pattern;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
 import plumbline.model.Conventions;
@@ -57,9 +58,9 @@ public final class ClaimsReader {
         if (f == null) return null;
         Heading h = heading(f, model, problems);
         List<Claim> claims = new ArrayList<>();
-        section(f, "reactions", Claim.Kind.REACTION, "node", h, problems, claims);
-        section(f, "members", Claim.Kind.MEMBER, "member", h, problems, claims);
-        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", h, problems, claims);
+        section(f, "reactions", Claim.Kind.REACTION, "node", h, model, problems, claims);
+        section(f, "members", Claim.Kind.MEMBER, "member", h, model, problems, claims);
+        section(f, "displacements", Claim.Kind.DISPLACEMENT, "node", h, model, problems, claims);
         return new ClaimSet(file, h.source, h.tolerances, claims);
     }
 
@@ -118,6 +119,19 @@ public final class ClaimsReader {
         return new Heading(source == null ? "" : source, units, tol, conventions(f, problems));
     }
 
+    private static final Pattern SPAN_RATIO = Pattern.compile(
+            "\\s*(?:L|l|span)\\s*/\\s*(\\d+(?:[.,]\\d+)?)\\s*");
+
+    /** The divisor n of a deflection written as a span ratio "L/n" or "span/n" (decimal comma allowed), else null. */
+    static String spanRatio(String text) {
+        var m = SPAN_RATIO.matcher(text);
+        return m.matches() ? m.group(1).replace(',', '.') : null;
+    }
+
+    private static String rs(Tree v) {
+        return v instanceof Tree.Scalar s ? s.text() : v.describe();
+    }
+
     /** A relative tolerance written as "3%" or as a fraction 0.03. */
     static double tolerance(Tree t, String field, List<Problem> problems) {
         if (t instanceof Tree.Scalar s) {
@@ -136,7 +150,7 @@ public final class ClaimsReader {
         return Double.NaN;
     }
 
-    private static void section(Fields f, String key, Claim.Kind kind, String nameKey, Heading h,
+    private static void section(Fields f, String key, Claim.Kind kind, String nameKey, Heading h, Model model,
                                 List<Problem> problems, List<Claim> out) {
         UnitSystem units = h.units();
         List<String> quantities = Quantity.symbols(kind);
@@ -164,6 +178,19 @@ public final class ClaimsReader {
                 n++;
                 Dimension d = quantity.dimension;
                 Tree v = g.get(q);
+                String ratio = quantity == Quantity.DEFLECTION && v instanceof Tree.Scalar rs ? spanRatio(rs.text()) : null;
+                if (ratio != null) {
+                    // "L/410": the member's length over 410 (unknown members are reported by the claim check)
+                    double n410 = Double.parseDouble(ratio);
+                    var member = name == null ? null : model.member(name);
+                    if (!(n410 > 0)) {
+                        g.problem(v.at(), q, "span ratio '" + rs(v) + "' has no positive divisor; expected e.g. L/360");
+                    } else if (member != null && combo != null) {
+                        out.add(Claim.inConvention(h.conventions(), kind, name, combo, quantity, model.lengthM(member) / n410,
+                                Double.NaN, "L/" + ratio, tol, g.at(q)));
+                    }
+                    continue;
+                }
                 double si = Fields.quantityOf(v, g.field(q), d, units, problems);
                 double written = Double.NaN;
                 String unit = units.symbol(d);

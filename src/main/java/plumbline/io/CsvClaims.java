@@ -96,7 +96,7 @@ final class CsvClaims {
                     if (columns == null) return null;
                     continue;
                 }
-                Claim c = claim(row, columns, at, heading, decimalComma, problems);
+                Claim c = claim(row, columns, at, heading, model, decimalComma, problems);
                 if (c != null) claims.add(c);
             }
         } catch (IOException | RuntimeException e) {
@@ -142,7 +142,7 @@ final class CsvClaims {
     }
 
     private static Claim claim(String[] row, Map<String, Integer> columns, SourceRef at, ClaimsReader.Heading heading,
-                               boolean decimalComma, List<Problem> problems) {
+                               Model model, boolean decimalComma, List<Problem> problems) {
         UnitSystem units = heading.units();
         String item = field(row, columns, "item").toLowerCase(Locale.ROOT), combo = field(row, columns, "combo"),
                 name = field(row, columns, "name"), q = field(row, columns, "quantity"), unitText = field(row, columns, "unit"),
@@ -168,23 +168,27 @@ final class CsvClaims {
             problems.add(new Problem(at, combo.isEmpty() ? "combo" : "name", "empty; expected a name"));
             return null;
         }
+        String ratio = quantity == Quantity.DEFLECTION ? ClaimsReader.spanRatio(valueText) : null;
+        if (ratio != null) {
+            double n = Double.parseDouble(ratio);
+            var member = model.member(name);
+            if (!(n > 0)) {
+                problems.add(new Problem(at, "value", "span ratio '" + valueText + "' has no positive divisor; expected e.g. L/360"));
+                return null;
+            }
+            if (member == null) return null; // reported by the claim check
+            return Claim.inConvention(heading.conventions(), kind, name, combo, quantity, model.lengthM(member) / n, Double.NaN,
+                    "L/" + ratio, tolerance(tolText, decimalComma, at, problems), at);
+        }
         double value = number(valueText, decimalComma);
         if (!Double.isFinite(value)) {
             problems.add(new Problem(at, "value", "'" + valueText + "' is not a finite number"
                     + (decimalComma ? " (a ';' file may use a decimal comma: 12,5)" : "")));
             return null;
         }
-        double tolerance = Double.NaN;
-        if (!tolText.isEmpty()) {
-            String t = tolText.endsWith("%") ? tolText.substring(0, tolText.length() - 1).trim() : tolText;
-            double v = number(t, decimalComma);
-            if (tolText.endsWith("%")) v /= 100;
-            if (!(v >= 0 && v < 1)) {
-                problems.add(new Problem(at, "tolerance", "'" + tolText + "' is not a relative tolerance; expected e.g. 3% or 0.03"));
-                return null;
-            }
-            tolerance = v;
-        }
+        int before = problems.size();
+        double tolerance = tolerance(tolText, decimalComma, at, problems);
+        if (problems.size() > before) return null;
         Dimension d = quantity.dimension;
         if (quantity == Quantity.DEFLECTION && value < 0) {
             problems.add(new Problem(at, "value", "a deflection is a magnitude; expected a value >= 0"));
@@ -207,6 +211,19 @@ final class CsvClaims {
             problems.add(new Problem(at, "unit", e.getMessage()));
             return null;
         }
+    }
+
+    /** The claim's own relative tolerance ("3%", "2,5%" in a ';' file, or 0.03); NaN when the cell is empty. */
+    private static double tolerance(String text, boolean decimalComma, SourceRef at, List<Problem> problems) {
+        if (text.isEmpty()) return Double.NaN;
+        String t = text.endsWith("%") ? text.substring(0, text.length() - 1).trim() : text;
+        double v = number(t, decimalComma);
+        if (text.endsWith("%")) v /= 100;
+        if (!(v >= 0 && v < 1)) {
+            problems.add(new Problem(at, "tolerance", "'" + text + "' is not a relative tolerance; expected e.g. 3% or 0.03"));
+            return Double.NaN;
+        }
+        return v;
     }
 
     /** A number as written, with a decimal comma where the file uses ';' between fields; NaN if it is none. */

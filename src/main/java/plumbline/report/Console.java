@@ -231,6 +231,7 @@ public final class Console {
     public static String asWritten(Claim c, UnitSystem u) {
         boolean otherUnit = !c.writtenUnit().equals(u.symbol(c.dimension()));
         if (c.convention().isEmpty() && !otherUnit) return "";
+        if (c.writtenUnit().startsWith("L/")) return "as written: " + c.writtenUnit(); // a span ratio
         if (!Double.isFinite(c.writtenValue())) return c.convention().isEmpty() ? "" : "as written: " + c.convention();
         String v = fmt(c.writtenValue()) + " " + c.writtenUnit();
         return c.convention().isEmpty() ? "as written: " + v : "as written: " + c.writtenQuantity() + " " + v + ", " + c.convention();
