@@ -35,7 +35,7 @@ public record Conventions(boolean reactionsOnSupport, boolean momentHogging, boo
 
     /** The quantity a claim of {@code q} in this convention is, in the tool's (M_max hogging-positive is -M_min). */
     public Quantity toolQuantity(Quantity q) {
-        return applying(q).isEmpty() || q.item == Claim.Kind.REACTION ? q : q.otherExtreme();
+        return applying(q).isEmpty() ? q : q.otherExtreme(); // a bound on the support is the other bound on the structure
     }
 
     /** The sign a claimed value takes in the tool's convention: -1 where the convention differs for it. */

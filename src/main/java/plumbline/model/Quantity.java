@@ -6,7 +6,8 @@ import plumbline.units.Dimension;
 
 /**
  * What a claim measures, with its dimension: a reaction component (on the structure, global
- * axes), a member peak, or a node displacement. A member peak is taken along the whole member
+ * axes) or its upper or lower bound over pattern arrangements or an envelope's combinations,
+ * a member peak, or a node displacement. A member peak is taken along the whole member
  * of one function (axial force N, shear V, moment M, or the deflection) and is its most positive
  * value (max), its most negative (min) or its largest magnitude (abs); the deflection is always a
  * magnitude. The symbol is what files, reports and the results JSON write.
@@ -15,6 +16,12 @@ public enum Quantity {
     FX("Fx", Claim.Kind.REACTION, Dimension.FORCE, null, null, 0),
     FY("Fy", Claim.Kind.REACTION, Dimension.FORCE, null, null, 1),
     MZ("Mz", Claim.Kind.REACTION, Dimension.MOMENT, null, null, 2),
+    FX_MAX("Fx_max", Claim.Kind.REACTION, Dimension.FORCE, null, Extreme.MAX, 0),
+    FX_MIN("Fx_min", Claim.Kind.REACTION, Dimension.FORCE, null, Extreme.MIN, 0),
+    FY_MAX("Fy_max", Claim.Kind.REACTION, Dimension.FORCE, null, Extreme.MAX, 1),
+    FY_MIN("Fy_min", Claim.Kind.REACTION, Dimension.FORCE, null, Extreme.MIN, 1),
+    MZ_MAX("Mz_max", Claim.Kind.REACTION, Dimension.MOMENT, null, Extreme.MAX, 2),
+    MZ_MIN("Mz_min", Claim.Kind.REACTION, Dimension.MOMENT, null, Extreme.MIN, 2),
     N_MAX("N_max", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Extreme.MAX, -1),
     N_MIN("N_min", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Extreme.MIN, -1),
     N_ABS("N_abs", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Extreme.ABS, -1),
@@ -74,8 +81,18 @@ public enum Quantity {
     /** The other extreme of the same function (M_min for M_max); a magnitude or a component is its own. */
     public Quantity otherExtreme() {
         if (extreme == null || extreme == Extreme.ABS) return this;
-        for (Quantity q : values()) if (q.function == function && q.extreme != extreme && q.extreme != Extreme.ABS) return q;
+        for (Quantity q : values()) {
+            if (q.item == item && q.function == function && q.component == component && q.extreme != null
+                    && q.extreme != extreme && q.extreme != Extreme.ABS) {
+                return q;
+            }
+        }
         throw new IllegalStateException(symbol);
+    }
+
+    /** A reaction's upper or lower value (under pattern loading or an envelope) rather than the value itself. */
+    public boolean isBound() {
+        return item == Claim.Kind.REACTION && extreme != null;
     }
 
     /** The largest magnitude of the same function (M_abs for M_max); the deflection is its own. */

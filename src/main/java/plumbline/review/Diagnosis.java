@@ -117,6 +117,7 @@ final class Diagnosis {
                 // another quantity of the same dimension (abs peaks only restate max and min)
                 if (q == c.quantity() || !q.dimension.equals(c.dimension())) continue;
                 if (q.extreme == Quantity.Extreme.ABS && q != Quantity.DEFLECTION) continue;
+                if (q.isBound() != c.quantity().isBound()) continue; // a bound against a value is no swap
                 Claim alt = with(c, c.name(), q, c.combo());
                 double v = Review.of(here, alt).value();
                 hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s matches the computed %s of the same %s (%s %s): "

@@ -207,7 +207,8 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
     }
 
     static Value of(LoadSetResult s, Claim c) {
-        boolean upper = c.valueInternal() >= 0;
+        // a bound names its side; a plain value of zero or more is compared with the upper one
+        boolean upper = c.quantity().isBound() ? c.quantity().extreme == Quantity.Extreme.MAX : c.valueInternal() >= 0;
         switch (c.item()) {
             case REACTION:
                 return new Value(s.reaction(c.name(), c.quantity().component, upper), s.name(),
@@ -231,7 +232,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         switch (c.item()) {
             case REACTION:
                 for (double[] x : s.reactions().values()) {
-                    max = c.quantity() == Quantity.MZ ? Math.max(max, Math.abs(x[2])) : Math.max(max, Math.hypot(x[0], x[1]));
+                    max = c.quantity().component == 2 ? Math.max(max, Math.abs(x[2])) : Math.max(max, Math.hypot(x[0], x[1]));
                 }
                 return max;
             case DISPLACEMENT:

@@ -102,4 +102,43 @@ class PatternEnvelopeTest {
         // every span loaded: R_A = 0.4 wL = 24 kN (three equal spans, by the same equations: M_B = -wL^2/10)
         assertEquals(24e3, plain.reaction("A", 1, true), 1e-6);
     }
+
+    @Test
+    void reactionBoundsAreClaimedByName() {
+        // FORMAT 4.1: Fy_max and Fy_min at A are the upper 27 kN and lower -3 kN above; a minimum reaction of
+        // 0.64 kN claimed as Fy (not Fy_min) would be compared with the upper bound and flagged
+        String model = Models.HEAD + """
+                nodes: {A: [0, 0], B: [6, 0], C: [12, 0], D: [18, 0]}
+                supports: {A: pinned, B: roller, C: roller, D: roller}
+                members:
+                  S1: {from: A, to: B, section: G}
+                  S2: {from: B, to: C, section: G}
+                  S3: {from: C, to: D, section: G}
+                loads:
+                  L: {type: live, pattern: true, member_loads: [{members: [S1, S2, S3], w: -10}]}
+                combinations: {C1: {L: 1.0}, C2: {L: 0.5}}
+                claims:
+                  conventions: {reactions: on-support}
+                  reactions:
+                    - {node: A, combo: L, Fy_max: 3, Fy_min: -27}
+                    - {node: A, combo: envelope, Fy_min: 3}
+                """;
+        Review r = Review.of(Analysis.of(Models.yaml(model.replace("  conventions: {reactions: on-support}\n", "")
+                .replace("Fy_max: 3, Fy_min: -27", "Fy_max: 27, Fy_min: -3").replace("Fy_min: 3}", "Fy_min: -3}")),
+                List.of(new StiffnessEngine())), new TolerancePolicy(Double.NaN));
+        assertEquals(27e3, r.claims().get(0).computed(), 1e-6);
+        assertEquals(-3e3, r.claims().get(1).computed(), 1e-6);
+        // the envelope's lower bound: the least of the combinations' lower bounds (C1: -3 kN; C2: -1.5 kN)
+        assertEquals(-3e3, r.claims().get(2).computed(), 1e-6);
+        assertEquals("C1", r.claims().get(2).governing());
+        for (ClaimResult c : r.claims()) assertEquals(ClaimResult.Status.OK, c.status(), c.claim().id());
+        // on the supports, the upper bound of the support force is minus the lower bound of the reaction
+        Review onSupport = Review.of(Analysis.of(Models.yaml(model), List.of(new StiffnessEngine())), new TolerancePolicy(Double.NaN));
+        assertEquals(Quantity.FY_MIN, onSupport.claims().get(0).claim().quantity());
+        assertEquals(-3e3, onSupport.claims().get(0).claim().valueInternal(), 1e-9);
+        assertEquals(ClaimResult.Status.OK, onSupport.claims().get(0).status());
+        assertEquals(ClaimResult.Status.OK, onSupport.claims().get(1).status());
+        assertEquals(Quantity.FY_MAX, onSupport.claims().get(2).claim().quantity());
+        assertEquals(ClaimResult.Status.MISMATCH, onSupport.claims().get(2).status(), "-3 on the support is +3 up, not 27");
+    }
 }
