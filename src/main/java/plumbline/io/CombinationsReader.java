@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import plumbline.model.Combination;
+import plumbline.model.LimitState;
 import plumbline.model.LoadCase;
 import plumbline.model.Problem;
 
@@ -29,10 +30,25 @@ final class CombinationsReader {
                 problems.add(new Problem(e.keyAt(), path, "combination '" + e.key()
                         + "' has the name of a load case; expected a name of its own"));
             }
-            if (e.key().equals("envelope")) {
-                problems.add(new Problem(e.keyAt(), path, "'envelope' is reserved for the envelope over all combinations"));
+            if (LimitState.isEnvelope(e.key())) {
+                problems.add(new Problem(e.keyAt(), path, "'" + e.key() + "' is reserved for an envelope over combinations"));
             }
-            Fields f = Fields.of(e.value(), path, problems, caseNames, "a map from load case to factor, e.g. {D: 1.35, L: 1.5}");
+            LimitState state = LimitState.NONE;
+            Tree factorsTree = e.value();
+            String factorsPath = path;
+            if (e.value() instanceof Tree.MapNode mn && mn.entries().containsKey("factors")) {
+                // {factors: {D: 1.35, L: 1.5}, limit_state: ULS}
+                Fields outer = Fields.of(e.value(), path, problems, List.of("factors", "limit_state"),
+                        "a map {factors: {D: 1.35, L: 1.5}, limit_state: ULS}");
+                String ls = outer.text("limit_state", false, "ULS or SLS");
+                if (ls != null) {
+                    if (ls.equals("ULS") || ls.equals("SLS")) state = LimitState.valueOf(ls);
+                    else outer.problem(outer.at("limit_state"), "limit_state", "found '" + ls + "'; expected ULS (ultimate) or SLS (serviceability)");
+                }
+                factorsTree = outer.get("factors");
+                factorsPath = path + ".factors";
+            }
+            Fields f = Fields.of(factorsTree, factorsPath, problems, caseNames, "a map from load case to factor, e.g. {D: 1.35, L: 1.5}");
             if (f == null) continue;
             Map<String, Double> factors = new LinkedHashMap<>();
             for (Tree.Entry c : f.map.entries().values()) {
@@ -46,7 +62,7 @@ final class CombinationsReader {
                 }
             }
             if (f.map.entries().isEmpty()) problems.add(new Problem(e.value().at(), path, "no load cases; expected at least one"));
-            out.add(new Combination(e.key(), factors, "user combination", e.keyAt()));
+            out.add(new Combination(e.key(), factors, "user combination", e.keyAt(), state));
         }
         return out;
     }

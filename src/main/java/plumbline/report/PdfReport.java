@@ -30,6 +30,7 @@ import com.lowagie.text.pdf.PdfTemplate;
 import com.lowagie.text.pdf.PdfWriter;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
+import plumbline.model.LimitState;
 import plumbline.model.LoadCase;
 import plumbline.model.Model;
 import plumbline.model.Quantity;
@@ -449,7 +450,7 @@ public final class PdfReport {
                 t.addCell(cell(Console.pct(c.relativeDifference()), f, shade));
                 t.addCell(cell(Console.pct(c.tolerance().relative()) + " " + shortWhy(c.tolerance().why()), small, shade));
                 t.addCell(cell(c.status().word.toUpperCase(Locale.ROOT), f, shade));
-                String gov = c.claim().combo().equals("envelope") || c.governing().contains(" with loads on ") ? "governs: " + c.governing() : "";
+                String gov = LimitState.isEnvelope(c.claim().combo()) || c.governing().contains(" with loads on ") ? "governs: " + c.governing() : "";
                 String diagnosis = c.explanation() > 0
                         ? "E" + c.explanation() + " (below)" + (c.ownDiagnosis() != null ? "; this claim alone: " + c.ownDiagnosis() : "")
                         : c.ownDiagnosis() != null ? c.ownDiagnosis()

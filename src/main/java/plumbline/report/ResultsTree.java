@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Properties;
 import plumbline.model.Claim;
+import plumbline.model.LimitState;
 import plumbline.model.Model;
 import plumbline.model.Quantity;
 import plumbline.review.Agreement;
@@ -66,7 +67,17 @@ public final class ResultsTree {
             for (LoadSet s : a.loadSets()) combos.put(s.name(), solution(m, s, sols.get(s.name())));
         }
         root.put("combinations", combos);
-        if (sols != null) root.put("envelope", envelope(m, a, sols));
+        if (sols != null) {
+            root.put("envelope", envelope(m, a, sols));
+            // the per-limit-state envelopes, where combinations state their limit state (format 4.1)
+            Map<String, Object> byState = new LinkedHashMap<>();
+            for (LimitState st : List.of(LimitState.ULS, LimitState.SLS)) {
+                if (a.loadSets().stream().anyMatch(s -> s.combination() && s.limitState() == st)) {
+                    byState.put(st.name(), envelope(m, a, sols, st));
+                }
+            }
+            if (!byState.isEmpty()) root.put("envelopes_by_limit_state", byState);
+        }
         root.put("engine", engineShown);
         Map<String, Object> engines = new LinkedHashMap<>();
         a.engines().forEach((k, v) -> {
@@ -147,6 +158,7 @@ public final class ResultsTree {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("factors", new LinkedHashMap<>(set.factors()));
         o.put("origin", set.origin());
+        if (set.limitState() != LimitState.NONE) o.put("limit_state", set.limitState().name());
         o.put("pattern_envelope", r.patterned());
         Map<String, Object> reacRange = new LinkedHashMap<>();
         Map<String, Object> reac = triples(u, rep.reactions().keySet(), new String[]{"Fx", "Fy", "Mz"},
@@ -182,8 +194,14 @@ public final class ResultsTree {
      * and every reaction component its most severe value and the combination that governs.
      */
     static Map<String, Object> envelope(Model m, Analysis a, Map<String, LoadSetResult> sols) {
+        return envelope(m, a, sols, LimitState.NONE);
+    }
+
+    /** The envelope over the combinations of one limit state ({@code NONE}: over every combination). */
+    static Map<String, Object> envelope(Model m, Analysis a, Map<String, LoadSetResult> sols, LimitState state) {
         UnitSystem u = m.units();
-        List<LoadSet> combos = a.loadSets().stream().filter(LoadSet::combination).toList();
+        List<LoadSet> combos = a.loadSets().stream().filter(LoadSet::combination)
+                .filter(s -> state == LimitState.NONE || s.limitState() == state).toList();
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("combinations", combos.stream().map(LoadSet::name).toList());
         if (combos.isEmpty()) return out;

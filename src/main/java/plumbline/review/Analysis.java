@@ -32,7 +32,7 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
     public static List<LoadSet> loadSets(Model model) {
         List<LoadSet> out = new ArrayList<>();
         for (LoadCase c : model.loadCases()) out.add(new LoadSet(c.name(), Map.of(c.name(), 1.0), "load case " + c.type(), false));
-        for (Combination c : model.combinations()) out.add(new LoadSet(c.name(), c.factors(), c.origin(), true));
+        for (Combination c : model.combinations()) out.add(new LoadSet(c.name(), c.factors(), c.origin(), true, c.limitState()));
         out.addAll(StandardCombinations.expand(model));
         return out;
     }

@@ -8,6 +8,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.function.Function;
 import plumbline.model.Claim;
+import plumbline.model.LimitState;
 import plumbline.model.LoadCase;
 import plumbline.model.MemberLoad;
 import plumbline.model.Model;
@@ -221,7 +222,7 @@ final class Diagnosis {
             if (!va.stable() || !va.solutions().containsKey(engine.name())) continue;
             LoadSetResult r = va.solutions().get(engine.name()).get(c.combo());
             if (r == null) continue;
-            if (c.combo().equals("envelope")) continue;
+            if (LimitState.isEnvelope(c.combo())) continue;
             double v = Review.of(r, c).value();
             hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with %s (%s %s)", what, t.getKey(),
                     fmt(m.units().fromInternal(v, c.dimension())), unitShown)));

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import plumbline.model.LimitState;
 import plumbline.model.Quantity;
 
 /**
@@ -23,9 +24,9 @@ public final class DrawnLoadSets {
     public static List<String> choose(Review review) {
         Analysis a = review.analysis();
         Set<String> out = new LinkedHashSet<>();
-        for (ClaimResult c : review.claims()) if (c.status() != ClaimResult.Status.OK && !c.claim().combo().equals("envelope")) out.add(c.claim().combo());
-        for (ClaimResult c : review.claims()) if (c.claim().combo().equals("envelope") && c.governing() != null) out.add(c.governing().split(" with ")[0]);
-        for (ClaimResult c : review.claims()) if (!c.claim().combo().equals("envelope")) out.add(c.claim().combo());
+        for (ClaimResult c : review.claims()) if (c.status() != ClaimResult.Status.OK && !LimitState.isEnvelope(c.claim().combo())) out.add(c.claim().combo());
+        for (ClaimResult c : review.claims()) if (LimitState.isEnvelope(c.claim().combo()) && c.governing() != null) out.add(c.governing().split(" with ")[0]);
+        for (ClaimResult c : review.claims()) if (!LimitState.isEnvelope(c.claim().combo())) out.add(c.claim().combo());
         if (a.stable() && out.isEmpty()) {
             String best = null;
             double bestM = -1;

@@ -13,6 +13,7 @@ import java.util.function.Function;
 import java.util.function.Predicate;
 import java.util.function.ToDoubleFunction;
 import plumbline.model.Claim;
+import plumbline.model.LimitState;
 import plumbline.model.LoadCase;
 import plumbline.model.Member;
 import plumbline.model.MemberLoad;
@@ -336,7 +337,7 @@ final class Explanations {
         double num = 0, den = 0;
         for (ClaimResult r : results) {
             Claim c = r.claim();
-            if (r.status() == ClaimResult.Status.OK || c.item() == Claim.Kind.MEMBER || c.combo().equals("envelope")) continue;
+            if (r.status() == ClaimResult.Status.OK || c.item() == Claim.Kind.MEMBER || LimitState.isEnvelope(c.combo())) continue;
             Map<String, Double> f = a.factors(c.combo());
             if (f == null || !f.containsKey(caseName) || a.model().loadCase(caseName).pattern()) continue;
             LoadSetResult alone = a.solutions().get(engine).get(caseName);
@@ -379,7 +380,7 @@ final class Explanations {
             List<LoadSet> unfactored = new ArrayList<>();
             Set<String> changed = new LinkedHashSet<>();
             for (LoadSet s : sets) {
-                unfactored.add(s.combination() ? new LoadSet(s.name(), unit(s.factors()), s.origin(), true) : s);
+                unfactored.add(s.combination() ? new LoadSet(s.name(), unit(s.factors()), s.origin(), true, s.limitState()) : s);
                 if (s.combination()) changed.add(s.name());
             }
             trials.add(new Trial("the load factors left out of every combination (service-level values claimed against "
@@ -397,7 +398,7 @@ final class Explanations {
     private static List<LoadSet> replaced(List<LoadSet> sets, int i, Map<String, Double> factors) {
         List<LoadSet> out = new ArrayList<>(sets);
         LoadSet s = sets.get(i);
-        out.set(i, new LoadSet(s.name(), factors, s.origin(), s.combination()));
+        out.set(i, new LoadSet(s.name(), factors, s.origin(), s.combination(), s.limitState()));
         return out;
     }
 

@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.function.Function;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
+import plumbline.model.LimitState;
 import plumbline.model.Quantity;
 import plumbline.solve.Engine;
 import plumbline.solve.Equilibrium;
@@ -190,10 +191,11 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
 
     /** As above, the results found by name on demand (a change that recomputes only the sets a claim needs). */
     static Value value(List<LoadSet> sets, Function<String, LoadSetResult> sols, Claim c) {
-        if (!c.combo().equals("envelope")) return of(sols.apply(c.combo()), c);
+        LimitState state = LimitState.ofEnvelope(c.combo());
+        if (state == null) return of(sols.apply(c.combo()), c);
         Value best = null;
         for (LoadSet s : sets) {
-            if (!s.combination()) continue;
+            if (!s.combination() || state != LimitState.NONE && s.limitState() != state) continue;
             Value v = of(sols.apply(s.name()), c);
             boolean better;
             if (best == null) better = true;

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import plumbline.model.Combination;
+import plumbline.model.LimitState;
 import plumbline.model.LoadCase;
 import plumbline.model.Model;
 
@@ -99,7 +100,7 @@ public final class StandardCombinations {
                 for (String c : a.cases()) f.merge(c, terms[k].factor(), Double::sum);
                 if (choices.size() > 1) name.append('-').append(a.symbol());
             }
-            if (out.stream().noneMatch(x -> x.factors().equals(f))) out.add(new LoadSet(name.toString(), f, origin, true));
+            if (out.stream().noneMatch(x -> x.factors().equals(f))) out.add(new LoadSet(name.toString(), f, origin, true, LimitState.ULS));
             // the next choice, odometer-wise from the last term
             int k = terms.length - 1;
             while (k >= 0 && ++idx[k] == terms[k].choices().size()) idx[k--] = 0;

@@ -6,7 +6,9 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import plumbline.model.Claim;
+import plumbline.model.LimitState;
 import plumbline.model.ClaimSet;
 import plumbline.model.Model;
 import plumbline.model.Problem;
@@ -26,7 +28,11 @@ public final class ClaimCheck {
      */
     public static final double CONTRADICTION = 1e-9;
 
-    public static List<Problem> check(Model m, Collection<String> loadSets, boolean hasCombinations) {
+    /**
+     * @param combinationStates the limit states of the model's combinations (NONE for one that does not say);
+     *                          empty when it has none
+     */
+    public static List<Problem> check(Model m, Collection<String> loadSets, Set<LimitState> combinationStates) {
         List<Problem> out = new ArrayList<>();
         Map<String, Claim> first = new HashMap<>();
         for (ClaimSet cs : m.claims()) {
@@ -54,11 +60,17 @@ public final class ClaimCheck {
                         if (m.member(c.name()) == null) out.add(new Problem(c.at(), field, "unknown member '" + c.name() + "'; expected a member of the model"));
                     }
                 }
-                if (c.combo().equals("envelope")) {
-                    if (!hasCombinations) out.add(new Problem(c.at(), field + " combo", "envelope is over the combinations, and the model defines none; expected a combination"));
+                LimitState state = LimitState.ofEnvelope(c.combo());
+                if (state == LimitState.NONE) {
+                    if (combinationStates.isEmpty()) out.add(new Problem(c.at(), field + " combo", "envelope is over the combinations, and the model defines none; expected a combination"));
+                } else if (state != null) {
+                    if (!combinationStates.contains(state)) {
+                        out.add(new Problem(c.at(), field + " combo", c.combo() + " is over the " + state + " combinations, and "
+                                + "the model has none; expected a combination with limit_state: " + state + ", or envelope"));
+                    }
                 } else if (!loadSets.contains(c.combo())) {
                     out.add(new Problem(c.at(), field + " combo", "unknown combination or load case '" + c.combo()
-                            + "'; expected one of: " + String.join(", ", loadSets) + " or envelope"));
+                            + "'; expected one of: " + String.join(", ", loadSets) + ", envelope, envelope:ULS or envelope:SLS"));
                 }
             }
         }
