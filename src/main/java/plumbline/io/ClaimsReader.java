@@ -119,6 +119,43 @@ public final class ClaimsReader {
         return new Heading(source == null ? "" : source, units, tol, conventions(f, problems));
     }
 
+    /**
+     * The quantity a key names in this claim: with {@code at}, N, V, M or deflection at that
+     * position; without it, a peak, an end value or a reaction or displacement component.
+     * Null (and a problem) for a key that does not fit.
+     */
+    private static Quantity placed(Fields g, Claim.Kind kind, String key) {
+        boolean at = g.has("at");
+        for (Quantity q : Quantity.of(kind)) {
+            if (!q.symbol.equals(key)) continue;
+            if (q.place == null || at == (q.place == Quantity.Place.AT)) return q;
+        }
+        g.problem(g.at(key), key, at ? "'" + key + "' is not a value at a position; with at, claim N, V, M or deflection"
+                : "'" + key + "' is a value at a position; expected at: (a distance from the member start, or e.g. '50%')");
+        return null;
+    }
+
+    /** A position along the claimed member: a length in the claims' units from its start, or "NN%" of its length. */
+    private static double position(Fields g, double lengthM, UnitSystem units) {
+        Tree t = g.get("at");
+        double x;
+        if (t instanceof Tree.Scalar s && s.text().trim().endsWith("%")) {
+            try {
+                x = Double.parseDouble(s.text().trim().replace("%", "").trim()) / 100 * lengthM;
+            } catch (NumberFormatException e) {
+                g.problem(t.at(), "at", "'" + s.text() + "' is not a percentage; expected e.g. '50%'");
+                return Double.NaN;
+            }
+        } else {
+            x = g.quantity("at", Dimension.LENGTH, units, true);
+        }
+        if (Double.isFinite(lengthM) && Double.isFinite(x) && (x < -1e-9 * lengthM || x > lengthM * (1 + 1e-9))) {
+            g.problem(t.at(), "at", "position " + x + " m is outside the member (length " + lengthM + " m); expected 0 to the length");
+            return Double.NaN;
+        }
+        return Double.isFinite(lengthM) ? Math.min(Math.max(x, 0), lengthM) : x;
+    }
+
     private static final Pattern SPAN_RATIO = Pattern.compile(
             "\\s*(?:L|l|span)\\s*/\\s*(\\d+(?:[.,]\\d+)?)\\s*");
 
@@ -161,16 +198,20 @@ public final class ClaimsReader {
             allowed.add(nameKey);
             allowed.add("combo");
             allowed.add("tolerance");
+            if (kind == Claim.Kind.MEMBER) allowed.add("at");
             Fields g = Fields.of(items.get(i), p, problems, allowed, "a map such as {" + nameKey + ": A, combo: ULS-1, "
                     + quantities.get(1) + ": 96.2}");
             if (g == null) continue;
             String name = g.text(nameKey, true, "a " + nameKey + " name");
             String combo = g.text("combo", true, "a combination, a load case or envelope");
             double tol = g.has("tolerance") ? tolerance(g.get("tolerance"), g.field("tolerance"), problems) : Double.NaN;
+            var claimedMember = kind == Claim.Kind.MEMBER && name != null ? model.member(name) : null;
+            double atM = g.has("at") ? position(g, claimedMember == null ? Double.NaN : model.lengthM(claimedMember), units) : Double.NaN;
             int n = 0, blank = 0;
-            for (Quantity quantity : Quantity.of(kind)) {
-                String q = quantity.symbol;
+            for (String q : quantities) {
                 if (!g.has(q)) continue;
+                Quantity quantity = placed(g, kind, q);
+                if (quantity == null) continue;
                 if (g.get(q) instanceof Tree.Scalar sc && sc.kind() == Tree.Scalar.Kind.NULL) {
                     blank++; // a ~ left in a template: not claimed
                     continue;
@@ -187,7 +228,7 @@ public final class ClaimsReader {
                         g.problem(v.at(), q, "span ratio '" + rs(v) + "' has no positive divisor; expected e.g. L/360");
                     } else if (member != null && combo != null) {
                         out.add(Claim.inConvention(h.conventions(), kind, name, combo, quantity, model.lengthM(member) / n410,
-                                Double.NaN, "L/" + ratio, tol, g.at(q)));
+                                Double.NaN, "L/" + ratio, tol, g.at(q), atM));
                     }
                     continue;
                 }
@@ -207,7 +248,7 @@ public final class ClaimsReader {
                     g.problem(v.at(), q, "a deflection is a magnitude; expected a value >= 0");
                 }
                 if (name != null && combo != null && !Double.isNaN(si)) {
-                    out.add(Claim.inConvention(h.conventions(), kind, name, combo, quantity, si, written, unit, tol, g.at(q)));
+                    out.add(Claim.inConvention(h.conventions(), kind, name, combo, quantity, si, written, unit, tol, g.at(q), atM));
                 }
             }
             if (n == 0 && blank == 0) {

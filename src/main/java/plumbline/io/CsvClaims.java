@@ -36,7 +36,7 @@ import plumbline.units.Units;
 final class CsvClaims {
 
     static final List<String> REQUIRED = List.of("item", "combo", "name", "quantity", "value");
-    static final List<String> OPTIONAL = List.of("unit", "tolerance");
+    static final List<String> OPTIONAL = List.of("unit", "tolerance", "at");
 
     private CsvClaims() {
     }
@@ -158,7 +158,17 @@ final class CsvClaims {
             return null;
         }
         List<String> qs = Quantity.symbols(kind);
-        Quantity quantity = Quantity.of(kind, q);
+        String atText = field(row, columns, "at");
+        Quantity quantity = null;
+        for (Quantity x : Quantity.of(kind)) {
+            // with a position, N, V, M or deflection there; without, a peak, an end value or a component
+            if (x.symbol.equals(q) && (x.place == null || atText.isEmpty() != (x.place == Quantity.Place.AT))) quantity = x;
+        }
+        if (quantity == null && qs.contains(q)) {
+            problems.add(new Problem(at, "at", atText.isEmpty() ? "'" + q + "' is a value at a position; expected a position in the at column"
+                    : "'" + q + "' is not a value at a position; with at, claim N, V, M or deflection"));
+            return null;
+        }
         if (quantity == null) {
             problems.add(new Problem(at, "quantity", Fields.unknown(item + " quantity", q, qs,
                     "expected one of " + String.join(", ", qs))));
@@ -178,7 +188,19 @@ final class CsvClaims {
             }
             if (member == null) return null; // reported by the claim check
             return Claim.inConvention(heading.conventions(), kind, name, combo, quantity, model.lengthM(member) / n, Double.NaN,
-                    "L/" + ratio, tolerance(tolText, decimalComma, at, problems), at);
+                    "L/" + ratio, tolerance(tolText, decimalComma, at, problems), at, Double.NaN);
+        }
+        double atM = Double.NaN;
+        if (!atText.isEmpty()) {
+            var member = model.member(name);
+            double len = member == null ? Double.NaN : model.lengthM(member);
+            atM = atText.endsWith("%") ? number(atText.substring(0, atText.length() - 1), decimalComma) / 100 * len
+                    : units.toInternal(number(atText, decimalComma), Dimension.LENGTH);
+            if (!Double.isFinite(atM) && member != null || Double.isFinite(len) && (atM < -1e-9 * len || atM > len * (1 + 1e-9))) {
+                problems.add(new Problem(at, "at", "'" + atText + "' is no position on member " + name
+                        + "; expected a distance from its start up to its length, or e.g. 50%"));
+                return null;
+            }
         }
         double value = number(valueText, decimalComma);
         if (!Double.isFinite(value)) {
@@ -196,7 +218,7 @@ final class CsvClaims {
         }
         if (unitText.isEmpty()) {
             return Claim.inConvention(heading.conventions(), kind, name, combo, quantity, units.toInternal(value, d), value,
-                    units.symbol(d), tolerance, at);
+                    units.symbol(d), tolerance, at, atM);
         }
         try {
             Unit u = Units.parse(unitText);
@@ -206,7 +228,7 @@ final class CsvClaims {
                 return null;
             }
             return Claim.inConvention(heading.conventions(), kind, name, combo, quantity, u.toInternal(value), value, unitText,
-                    tolerance, at);
+                    tolerance, at, atM);
         } catch (UnitParseException e) {
             problems.add(new Problem(at, "unit", e.getMessage()));
             return null;

@@ -14,19 +14,28 @@ import plumbline.units.Dimension;
  */
 public record Claim(Kind item, String name, String combo, Quantity quantity, double valueInternal,
                     double writtenValue, String writtenUnit, double toleranceOverride, SourceRef at,
-                    Quantity writtenQuantity, String convention) {
+                    Quantity writtenQuantity, String convention, double atM) {
 
-    /** A claim written in the tool's own sign convention. */
+    /** A claim written in the tool's own sign convention, of a quantity that needs no position. */
     public Claim(Kind item, String name, String combo, Quantity quantity, double valueInternal, double writtenValue,
                  String writtenUnit, double toleranceOverride, SourceRef at) {
-        this(item, name, combo, quantity, valueInternal, writtenValue, writtenUnit, toleranceOverride, at, quantity, "");
+        this(item, name, combo, quantity, valueInternal, writtenValue, writtenUnit, toleranceOverride, at, quantity, "", Double.NaN);
     }
 
-    /** The claim as the source gave it, turned into the tool's sign convention ({@code value} in SI, as written). */
+    /**
+     * The claim as the source gave it, turned into the tool's sign convention ({@code value} in SI, as written);
+     * {@code atM} the position along the member for a value at a position (NaN otherwise).
+     */
     public static Claim inConvention(Conventions k, Kind item, String name, String combo, Quantity written, double siAsWritten,
-                                     double writtenValue, String writtenUnit, double toleranceOverride, SourceRef at) {
+                                     double writtenValue, String writtenUnit, double toleranceOverride, SourceRef at, double atM) {
         return new Claim(item, name, combo, k.toolQuantity(written), k.toolSign(written) * siAsWritten, writtenValue, writtenUnit,
-                toleranceOverride, at, written, k.applying(written));
+                toleranceOverride, at, written, k.applying(written), atM);
+    }
+
+    /** The same claim read against another place, load set or quantity (for the diagnosis's what-ifs). */
+    public Claim retarget(String otherName, String otherCombo, Quantity otherQuantity) {
+        return new Claim(item, otherName, otherCombo, otherQuantity, valueInternal, writtenValue, writtenUnit, toleranceOverride, at,
+                otherQuantity, convention, atM);
     }
 
     public enum Kind {
@@ -45,6 +54,6 @@ public record Claim(Kind item, String name, String combo, Quantity quantity, dou
 
     public String id() {
         String prefix = item == Kind.REACTION ? "R" : item == Kind.MEMBER ? "M" : "D";
-        return prefix + "-" + name + "-" + combo + "-" + writtenQuantity;
+        return prefix + "-" + name + "-" + combo + "-" + writtenQuantity + (Double.isNaN(atM) ? "" : "@" + (float) atM);
     }
 }

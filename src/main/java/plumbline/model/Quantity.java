@@ -32,6 +32,17 @@ public enum Quantity {
     M_MIN("M_min", Claim.Kind.MEMBER, Dimension.MOMENT, Function.M, Extreme.MIN, -1),
     M_ABS("M_abs", Claim.Kind.MEMBER, Dimension.MOMENT, Function.M, Extreme.ABS, -1),
     DEFLECTION("deflection", Claim.Kind.MEMBER, Dimension.LENGTH, Function.DEFLECTION, Extreme.ABS, -1),
+    N_START("N_start", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Place.START),
+    N_END("N_end", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Place.END),
+    V_START("V_start", Claim.Kind.MEMBER, Dimension.FORCE, Function.V, Place.START),
+    V_END("V_end", Claim.Kind.MEMBER, Dimension.FORCE, Function.V, Place.END),
+    M_START("M_start", Claim.Kind.MEMBER, Dimension.MOMENT, Function.M, Place.START),
+    M_END("M_end", Claim.Kind.MEMBER, Dimension.MOMENT, Function.M, Place.END),
+    N_AT("N", Claim.Kind.MEMBER, Dimension.FORCE, Function.N, Place.AT),
+    V_AT("V", Claim.Kind.MEMBER, Dimension.FORCE, Function.V, Place.AT),
+    M_AT("M", Claim.Kind.MEMBER, Dimension.MOMENT, Function.M, Place.AT),
+    /** The deflection at a position, signed along the member's local y (written "deflection" with at). */
+    DEFLECTION_AT("deflection", Claim.Kind.MEMBER, Dimension.LENGTH, Function.DEFLECTION, Place.AT),
     UX("ux", Claim.Kind.DISPLACEMENT, Dimension.LENGTH, null, null, 0),
     UY("uy", Claim.Kind.DISPLACEMENT, Dimension.LENGTH, null, null, 1),
     RZ("rz", Claim.Kind.DISPLACEMENT, Dimension.ANGLE, null, null, 2);
@@ -42,6 +53,12 @@ public enum Quantity {
     /** Which extreme of it: the most positive, the most negative, or the largest magnitude. */
     public enum Extreme { MAX, MIN, ABS }
 
+    /**
+     * Where along a member a member quantity is taken: its peak over the whole member, its
+     * value at the start or at the end, or at a position the claim gives ({@code at}).
+     */
+    public enum Place { PEAK, START, END, AT }
+
     public final String symbol;
     public final Claim.Kind item;
     public final Dimension dimension;
@@ -50,6 +67,8 @@ public enum Quantity {
     public final Extreme extreme;
     /** For a reaction or a displacement, the component {x, y, rotation} = {0, 1, 2}; -1 for a peak. */
     public final int component;
+    /** For a member quantity, where along the member; null otherwise. */
+    public final Place place;
 
     Quantity(String symbol, Claim.Kind item, Dimension dimension, Function function, Extreme extreme, int component) {
         this.symbol = symbol;
@@ -58,6 +77,30 @@ public enum Quantity {
         this.function = function;
         this.extreme = extreme;
         this.component = component;
+        this.place = item == Claim.Kind.MEMBER ? Place.PEAK : null;
+    }
+
+    /** A member's value at one place (an end, or a position): no extreme. */
+    Quantity(String symbol, Claim.Kind item, Dimension dimension, Function function, Place place) {
+        this.symbol = symbol;
+        this.item = item;
+        this.dimension = dimension;
+        this.function = function;
+        this.extreme = null;
+        this.component = -1;
+        this.place = place;
+    }
+
+    /** A member peak (over the whole member), as opposed to a value at an end or a position. */
+    public boolean isPeak() {
+        return place == Place.PEAK;
+    }
+
+    /** The member peaks, in the order of the format (what the results list per member). */
+    public static List<Quantity> peaks() {
+        List<Quantity> out = new ArrayList<>();
+        for (Quantity q : values()) if (q.isPeak()) out.add(q);
+        return out;
     }
 
     /** The quantities a claim of this kind may name, in the order of the format. */
@@ -75,7 +118,7 @@ public enum Quantity {
 
     /** The symbols of a kind's quantities, in order. */
     public static List<String> symbols(Claim.Kind item) {
-        return of(item).stream().map(q -> q.symbol).toList();
+        return of(item).stream().map(q -> q.symbol).distinct().toList();
     }
 
     /** The other extreme of the same function (M_min for M_max); a magnitude or a component is its own. */

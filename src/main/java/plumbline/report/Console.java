@@ -101,7 +101,7 @@ public final class Console {
                 String flag = c.status() == ClaimResult.Status.OK ? "  ok  " : c.status() == ClaimResult.Status.MARGINAL ? "? MARG" : "X MISM";
                 String unit = u.symbol(cl.dimension());
                 String line = String.format(Locale.ROOT, "%s %s %s %s %s: %s / %s %s (%s, tol %s)", flag, cl.item().word,
-                        cl.name(), cl.quantity(), cl.combo(), fmt(u.fromInternal(cl.valueInternal(), cl.dimension())),
+                        cl.name(), quantityLabel(cl, u), cl.combo(), fmt(u.fromInternal(cl.valueInternal(), cl.dimension())),
                         fmt(u.fromInternal(c.computed(), cl.dimension())), unit,
                         c.status() == ClaimResult.Status.OK && c.relativeDifference() > c.tolerance().relative()
                                 ? "under the absolute floor" : pct(c.relativeDifference()),
@@ -222,6 +222,12 @@ public final class Console {
         return String.format(Locale.ROOT, "%.3e", v);
     }
 
+
+    /** The claimed quantity, with its position along the member for a value at a position ("M at 2.50 m"). */
+    public static String quantityLabel(Claim c, UnitSystem u) {
+        if (Double.isNaN(c.atM())) return c.quantity().symbol;
+        return c.quantity().symbol + " at " + fmt(u.fromInternal(c.atM(), Dimension.LENGTH)) + " " + u.length().symbol();
+    }
 
     /**
      * The claim as its source wrote it, where that differs from how it is compared: another

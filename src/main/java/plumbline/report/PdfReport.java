@@ -441,7 +441,7 @@ public final class PdfReport {
                 Font f = c.status() == ClaimResult.Status.OK ? small : smallBold;
                 String mark = c.status() == ClaimResult.Status.MISMATCH ? "!!" : c.status() == ClaimResult.Status.MARGINAL ? "?" : "";
                 t.addCell(cell(mark, f, shade));
-                t.addCell(cell(c.claim().item().word + " " + c.claim().name() + " " + c.claim().quantity(), f, shade));
+                t.addCell(cell(c.claim().item().word + " " + c.claim().name() + " " + Console.quantityLabel(c.claim(), u), f, shade));
                 String written = Console.asWritten(c.claim(), u);
                 t.addCell(cell(value(u, c.claim().valueInternal(), c.claim().dimension()) + (written.isEmpty() ? "" : "\n(" + written + ")"),
                         f, shade));

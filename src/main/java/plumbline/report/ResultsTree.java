@@ -44,7 +44,7 @@ public final class ResultsTree {
         }
         return p.getProperty("version", "unknown");
     }
-    static final List<Quantity> PEAKS = Quantity.of(Claim.Kind.MEMBER);
+    static final List<Quantity> PEAKS = Quantity.peaks();
 
     private ResultsTree() {
     }

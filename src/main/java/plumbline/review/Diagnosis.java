@@ -119,6 +119,7 @@ final class Diagnosis {
                 if (q == c.quantity() || !q.dimension.equals(c.dimension())) continue;
                 if (q.extreme == Quantity.Extreme.ABS && q != Quantity.DEFLECTION) continue;
                 if (q.isBound() != c.quantity().isBound()) continue; // a bound against a value is no swap
+                if (q.place != c.quantity().place) continue; // an end value against a peak is no swap either
                 Claim alt = with(c, c.name(), q, c.combo());
                 double v = Review.of(here, alt).value();
                 hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s matches the computed %s of the same %s (%s %s): "
@@ -277,8 +278,7 @@ final class Diagnosis {
     }
 
     private static Claim with(Claim c, String name, Quantity quantity, String combo) {
-        return new Claim(c.item(), name, combo, quantity, c.valueInternal(), c.writtenValue(), c.writtenUnit(),
-                c.toleranceOverride(), c.at());
+        return c.retarget(name, combo, quantity);
     }
 
     static String describe(Claim c) {

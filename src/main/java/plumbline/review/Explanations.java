@@ -160,8 +160,7 @@ final class Explanations {
     private double computed(ClaimResult r, Quantity q) {
         if (q == r.claim().quantity()) return r.computed();
         Claim c = r.claim();
-        return Review.value(a.loadSets(), a.solutions().get(engine), new Claim(c.item(), c.name(), c.combo(), q,
-                c.valueInternal(), c.writtenValue(), c.writtenUnit(), c.toleranceOverride(), c.at())).value();
+        return Review.value(a.loadSets(), a.solutions().get(engine), c.retarget(c.name(), c.combo(), q)).value();
     }
 
     private void conventions() {
@@ -341,8 +340,7 @@ final class Explanations {
             Map<String, Double> f = a.factors(c.combo());
             if (f == null || !f.containsKey(caseName) || a.model().loadCase(caseName).pattern()) continue;
             LoadSetResult alone = a.solutions().get(engine).get(caseName);
-            double part = f.get(caseName) * Review.of(alone, new Claim(c.item(), c.name(), caseName, c.quantity(),
-                    c.valueInternal(), c.writtenValue(), c.writtenUnit(), c.toleranceOverride(), c.at())).value();
+            double part = f.get(caseName) * Review.of(alone, c.retarget(c.name(), caseName, c.quantity())).value();
             num += part * (c.valueInternal() - r.computed());
             den += part * part;
         }

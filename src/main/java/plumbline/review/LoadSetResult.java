@@ -31,6 +31,12 @@ public sealed interface LoadSetResult {
 
     Peak peak(String member, Quantity quantity);
 
+    /**
+     * A member function's value at {@code xM} from the start (the value just left of it when
+     * {@code fromLeft}, as at the member's end); for an envelope its upper or lower value.
+     */
+    double valueAt(String member, Quantity.Function f, double xM, boolean fromLeft, boolean upper);
+
     /** The worst equilibrium residual of the states the set is made of (NaN, if any, is the worst). */
     default double equilibriumResidual() {
         return solutions().stream().mapToDouble(Solution::equilibriumResidual).max().orElse(0);
@@ -67,6 +73,11 @@ public sealed interface LoadSetResult {
         public Peak peak(String member, Quantity quantity) {
             MemberSolution m = solution.members().get(member);
             return new Peak(m.peaks().value(quantity), m.peaks().position(quantity), List.of());
+        }
+
+        public double valueAt(String member, Quantity.Function f, double xM, boolean fromLeft, boolean upper) {
+            Piecewise p = Pattern.function(solution.members().get(member).response(), f);
+            return fromLeft ? p.atLeft(xM) : p.at(xM);
         }
 
         public List<Solution> solutions() {
@@ -128,6 +139,19 @@ public sealed interface LoadSetResult {
             };
         }
 
+        public double valueAt(String member, Quantity.Function f, double xM, boolean fromLeft, boolean upper) {
+            double v = at(function(fixed.members().get(member).response(), f), xM, fromLeft);
+            for (Part p : parts) {
+                double q = at(function(p.solution().members().get(member).response(), f), xM, fromLeft);
+                v += upper ? Math.max(0, q) : Math.min(0, q); // each span on only where it adds to the side sought
+            }
+            return v;
+        }
+
+        private static double at(Piecewise p, double xM, boolean fromLeft) {
+            return fromLeft ? p.atLeft(xM) : p.at(xM);
+        }
+
         private Peak peak(Envelope.Extreme e) {
             List<String> on = new ArrayList<>();
             for (int k : e.partsOn()) on.add(parts.get(k).loadedMember());
@@ -140,7 +164,7 @@ public sealed interface LoadSetResult {
             return out;
         }
 
-        private static Piecewise function(MemberResponse r, Quantity.Function f) {
+        static Piecewise function(MemberResponse r, Quantity.Function f) {
             return switch (f) {
                 case N -> r.axial();
                 case V -> r.shear();

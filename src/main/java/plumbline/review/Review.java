@@ -201,7 +201,9 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
             if (best == null) better = true;
             else if (c.quantity().extreme == Quantity.Extreme.MAX) better = v.value > best.value;
             else if (c.quantity().extreme == Quantity.Extreme.MIN) better = v.value < best.value;
-            else if (c.item() != Claim.Kind.MEMBER) better = c.valueInternal() >= 0 ? v.value > best.value : v.value < best.value;
+            else if (c.item() != Claim.Kind.MEMBER || !c.quantity().isPeak()) {
+                better = c.valueInternal() >= 0 ? v.value > best.value : v.value < best.value;
+            }
             else better = Math.abs(v.value) > Math.abs(best.value);
             if (better) best = v;
         }
@@ -219,7 +221,14 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 return new Value(s.displacement(c.name(), c.quantity().component, upper),
                         s.name(), List.of());
             default: {
-                LoadSetResult.Peak p = s.peak(c.name(), c.quantity());
+                Quantity q = c.quantity();
+                if (!q.isPeak()) {
+                    // a value at an end or a position; the end value is the one just inside the member
+                    double len = s.representative().members().get(c.name()).actions().lengthM();
+                    double x = q.place == Quantity.Place.START ? 0 : q.place == Quantity.Place.END ? len : c.atM();
+                    return new Value(s.valueAt(c.name(), q.function, x, q.place == Quantity.Place.END, upper), s.name(), List.of());
+                }
+                LoadSetResult.Peak p = s.peak(c.name(), q);
                 return new Value(p.value(), s.name(), p.loadedMembers());
             }
         }

@@ -121,4 +121,15 @@ class CsvClaimsTest {
                 e.problems().toString());
         assertEquals(1, e.problems().get(0).at().line());
     }
+
+    @Test
+    void aValueAtAPositionInTheAtColumn() throws Exception {
+        // simple beam, w = 10 kN/m on 6 m: M(2) = w x (L - x) / 2 = 40 kN*m (statics by hand)
+        ClaimSet cs = read("item;combo;name;quantity;value;unit;at\nmember;D;M1;M;40;kNm;2\nmember;D;M1;M;45;kNm;50%\n");
+        assertEquals(Quantity.M_AT, cs.claims().get(0).quantity());
+        assertEquals(2.0, cs.claims().get(0).atM(), 0);
+        assertEquals(3.0, cs.claims().get(1).atM(), 1e-15);
+        InputException e = assertThrows(InputException.class, () -> read("item,combo,name,quantity,value,at\nmember,D,M1,M,40,9\n"));
+        assertTrue(e.problems().get(0).message().contains("is no position on member M1"), e.problems().toString());
+    }
 }
