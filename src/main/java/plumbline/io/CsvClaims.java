@@ -31,7 +31,8 @@ import plumbline.units.Units;
  * case-insensitively with spaces trimmed ({@code item, combo, name, quantity, value}, and
  * optionally {@code unit} and {@code tolerance}); a header separated by {@code ;} means
  * {@code ;} between fields and a decimal comma in numbers; rows that are empty or hold only
- * separators are skipped.
+ * separators are skipped, and so is a row whose value is empty (not claimed, as a template
+ * row left blank).
  */
 final class CsvClaims {
 
@@ -178,6 +179,7 @@ final class CsvClaims {
             problems.add(new Problem(at, combo.isEmpty() ? "combo" : "name", "empty; expected a name"));
             return null;
         }
+        if (valueText.isEmpty()) return null; // an empty value is not claimed (a template row left blank)
         String ratio = quantity == Quantity.DEFLECTION ? ClaimsReader.spanRatio(valueText) : null;
         if (ratio != null) {
             double n = Double.parseDouble(ratio);

@@ -54,6 +54,30 @@ class SamplesTest {
     }
 
     @org.junit.jupiter.api.Test
+    void theCsvTemplateAndEveryKindOfClaimRead() throws Exception {
+        // every row of the YAML skeleton names a quantity the reader takes: left as ~ nothing is claimed
+        CliRunner y = CliRunner.run("template", "samples/three-span-beam.yaml");
+        Path yf = tempDir.resolve("all.yaml");
+        Files.writeString(yf, y.out());
+        CliRunner ry = CliRunner.run("check", "samples/three-span-beam.yaml", "--claims", yf.toString());
+        assertEquals(0, ry.code(), ry.err() + ry.out());
+        assertTrue(ry.out().contains("Verdict: NO-CLAIMS"), ry.out());
+        for (String kind : List.of("Fy_max: ~", "M_start: ~", "at: 50%, M: ~", "combo: envelope")) {
+            assertTrue(y.out().contains(kind), kind);
+        }
+        // the CSV skeleton: a row whose value is blank is not claimed
+        CliRunner c = CliRunner.run("template", "samples/three-span-beam.yaml", "--csv");
+        assertEquals(0, c.code(), c.err());
+        Path cf = tempDir.resolve("all.csv");
+        Files.writeString(cf, c.out());
+        CliRunner rc = CliRunner.run("check", "samples/three-span-beam.yaml", "--claims", cf.toString());
+        assertEquals(0, rc.code(), rc.err() + rc.out());
+        assertTrue(rc.out().contains("Verdict: NO-CLAIMS"), rc.out());
+        assertTrue(c.out().contains("item,combo,name,quantity,value,unit,tolerance,at"), c.out());
+        assertTrue(c.out().contains("member,D,S1,M,,,,50%"), c.out());
+    }
+
+    @org.junit.jupiter.api.Test
     void aCheckWithNoClaimsSaysSoAndIsNeverOk() throws Exception {
         Path dir = tempDir;
         CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--json", dir.resolve("r.json").toString(),
