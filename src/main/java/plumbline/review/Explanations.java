@@ -135,19 +135,41 @@ final class Explanations {
     }
 
     private List<Explanation> best() {
+        List<Explanation> scored = new ArrayList<>();
+        List<Boolean> fitted = new ArrayList<>();
+        for (Trial t : trials) {
+            scored.add(score(t));
+            fitted.add(t.fitted);
+        }
+        return rank(scored, fitted);
+    }
+
+    /**
+     * Whether an explanation is worth a checker's time: it explains two or more flagged
+     * claims and more than it breaks, or with it every claim agrees and there was at least
+     * one agreeing claim to keep (one flagged claim alone is the per-claim diagnosis's business).
+     */
+    static boolean kept(Explanation e) {
+        boolean several = e.explains().size() >= 2 && e.explains().size() > e.breaks().size();
+        boolean whole = e.allOkAfter() && !e.explains().isEmpty() && e.agreeing() > 0;
+        return several || whole;
+    }
+
+    /**
+     * The kept explanations, best first, at most {@link #SHOWN}, each sentence once: every
+     * claim agreeing first, then the most explained net of those broken, then the fewest
+     * broken, then a change named in advance before one fitted to the claims, then the order
+     * the trials were made in (claims, loads, structure).
+     */
+    static List<Explanation> rank(List<Explanation> scored, List<Boolean> fitted) {
         record Scored(Explanation e, boolean fitted) {
         }
         List<Scored> kept = new ArrayList<>();
         Set<String> seen = new LinkedHashSet<>();
-        for (Trial t : trials) {
-            Explanation e = score(t);
-            boolean several = e.explains().size() >= 2 && e.explains().size() > e.breaks().size();
-            // one flagged claim alone is the per-claim diagnosis's business, unless the change is
-            // tested against claims that agree (and leaves them agreeing)
-            boolean whole = e.allOkAfter() && !e.explains().isEmpty() && e.agreeing() > 0;
-            if ((several || whole) && seen.add(e.sentence())) kept.add(new Scored(e, t.fitted));
+        for (int i = 0; i < scored.size(); i++) {
+            Explanation e = scored.get(i);
+            if (kept(e) && seen.add(e.sentence())) kept.add(new Scored(e, fitted.get(i)));
         }
-        // stable sort: among equals, the order the trials were made in (claims, loads, structure)
         kept.sort(Comparator.comparing((Scored x) -> !x.e.allOkAfter())
                 .thenComparing(x -> -(x.e.explains().size() - x.e.breaks().size()))
                 .thenComparing(x -> x.e.breaks().size())
@@ -512,7 +534,7 @@ final class Explanations {
     }
 
     /** Same length within 1% and the same direction: a load moved between them keeps its meaning. */
-    private static boolean alike(Model m, Member a, Member b) {
+    static boolean alike(Model m, Member a, Member b) {
         double la = m.lengthM(a), lb = m.lengthM(b);
         double[] da = m.directionOf(a), db = m.directionOf(b);
         return Math.abs(la - lb) <= 0.01 * la && da[0] * db[0] + da[1] * db[1] > 0.9999;
