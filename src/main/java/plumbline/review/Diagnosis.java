@@ -177,6 +177,17 @@ final class Diagnosis {
                         fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
             }
         }
+        if (here != null && here.patterned() && c.item() != Claim.Kind.MEMBER && !c.quantity().isBound()) {
+            // a plain value under pattern loading is compared with the bound on its sign's side: the other bound
+            boolean upper = c.valueInternal() >= 0;
+            int k = c.quantity().component;
+            double other = c.item() == Claim.Kind.REACTION ? here.reaction(c.name(), k, !upper) : here.displacement(c.name(), k, !upper);
+            String side = upper ? "lower" : "upper";
+            String advice = c.item() == Claim.Kind.REACTION ? "claim it as " + c.quantity().symbol + (upper ? "_min" : "_max")
+                    : "a displacement claim is compared with the bound on its sign's side";
+            hs.add(new Hypothesis(other, String.format(Locale.ROOT, "claimed %s equals the %s bound under pattern loading (%s %s): %s",
+                    what, side, fmt(m.units().fromInternal(other, c.dimension())), unitShown, advice)));
+        }
         if (here != null && here.patterned()) {
             double v = Review.of(new LoadSetResult.Plain(here.representative()), c).value();
             hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with every span loaded (%s %s): "

@@ -141,4 +141,28 @@ class PatternEnvelopeTest {
         assertEquals(Quantity.FY_MAX, onSupport.claims().get(2).claim().quantity());
         assertEquals(ClaimResult.Status.MISMATCH, onSupport.claims().get(2).status(), "-3 on the support is +3 up, not 27");
     }
+
+    @Test
+    void aMinimumReactionClaimedAsAPlainValueIsToldWhy() {
+        // dead 5 kN/m on every span adds 0.4 wL = 12 kN at A: the bounds are 39 and 9 kN; "Fy: 9" is compared with 39
+        Review r = Review.of(Analysis.of(Models.yaml(Models.HEAD + """
+                nodes: {A: [0, 0], B: [6, 0], C: [12, 0], D: [18, 0]}
+                supports: {A: pinned, B: roller, C: roller, D: roller}
+                members:
+                  S1: {from: A, to: B, section: G}
+                  S2: {from: B, to: C, section: G}
+                  S3: {from: C, to: D, section: G}
+                loads:
+                  L: {type: live, pattern: true, member_loads: [{members: [S1, S2, S3], w: -10}]}
+                  G: {type: dead, member_loads: [{members: [S1, S2, S3], w: -5}]}
+                combinations: {SLS: {G: 1.0, L: 1.0}}
+                claims:
+                  reactions:
+                    - {node: A, combo: SLS, Fy: 9}
+                """), List.of(new StiffnessEngine())), new TolerancePolicy(Double.NaN), new StiffnessEngine());
+        ClaimResult c = r.claims().get(0);
+        assertEquals(39e3, c.computed(), 1e-6);
+        assertEquals(ClaimResult.Status.MISMATCH, c.status());
+        assertTrue(c.diagnosis().contains("equals the lower bound under pattern loading (9.000 kN): claim it as Fy_min"), c.diagnosis());
+    }
 }
