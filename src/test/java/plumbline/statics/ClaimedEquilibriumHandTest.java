@@ -218,4 +218,51 @@ class ClaimedEquilibriumHandTest {
                 + "}\nmembers: {M1: {from: A, to: B, section: G}}\n");
         assertArrayEquals(new boolean[]{x, y, m}, ClaimedEquilibrium.globalComponents(model.supports().get("B")), name);
     }
+
+    @Test
+    void momentsAreTakenAboutTheFirstSupportWhereverItIs() {
+        // the same beam moved to A (10, 2), B (18, 2): the hand reactions still balance, about A, in every sum;
+        // moments about the origin instead would be off by 2 x 10 kN (Fx at A) and 10 x 40 kN of the loads
+        Model m = Models.yaml(Models.HEAD + """
+                nodes: {A: [10, 2], B: [18, 2]}
+                supports: {A: pinned, B: roller}
+                members: {M1: {from: A, to: B, section: G}}
+                loads:
+                  D:
+                    type: dead
+                    member_loads:
+                      - {member: M1, P: -40, at: 2}
+                    node_loads:
+                      - {node: B, Fx: 10}
+                claims:
+                  reactions:
+                    - {node: A, combo: D, Fx: -10, Fy: 30}
+                    - {node: B, combo: D, Fy: 10}
+                """);
+        ClaimedEquilibrium r = check(m, 1e-12);
+        assertEquals(0, r.sumMomentNm(), 1e-9);
+        assertTrue(r.balanced());
+    }
+
+    @Test
+    void withNoLoadTheClaimedReactionsSetTheScale() {
+        // a fixed-ended beam whose support B settles: no load, reactions that balance each other
+        // (R = 12 EI d / L^3 = 11.111 kN, M = 6 EI d / L^2 = 33.333 kN*m for EI = 20,000 kN*m2, d = 10 mm, L = 6 m);
+        // 1 N out of balance against 22 kN of claimed reactions is within 0.5%
+        Model m = Models.yaml(Models.HEAD + """
+                nodes: {A: [0, 0], B: [6, 0]}
+                supports: {A: fixed, B: fixed}
+                members: {M1: {from: A, to: B, section: G}}
+                loads:
+                  S: {type: other, settlements: [{node: B, uy: -10 mm}]}
+                claims:
+                  reactions:
+                    - {node: A, combo: S, Fx: 0, Fy: 11.1111111, Mz: 33.3333333}
+                    - {node: B, combo: S, Fx: 0, Fy: -11.1101111, Mz: 33.3333333}
+                """);
+        ClaimedEquilibrium r = check(m, ClaimedEquilibrium.DEFAULT_TOLERANCE);
+        assertEquals(1.0, r.sumFyN(), 1e-6);
+        assertEquals(1.0 / (2 * 11111.1111 - 1), r.relFy(), 1e-9, "scaled by the claimed reactions' magnitude");
+        assertTrue(r.balanced());
+    }
 }
