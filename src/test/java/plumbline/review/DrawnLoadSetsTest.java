@@ -43,4 +43,27 @@ class DrawnLoadSetsTest {
         assertEquals(2, DrawnLoadSets.AT_MOST);
         assertEquals(List.of("D", "asce7-strength/2"), DrawnLoadSets.choose(r));
     }
+
+    static Review beam(String loads) {
+        var m = plumbline.Models.yaml(plumbline.Models.HEAD + """
+                nodes: {A: [0, 0], B: [6, 0]}
+                supports: {A: pinned, B: roller}
+                members: {M1: {from: A, to: B, section: G}}
+                """ + loads);
+        return Review.of(Analysis.of(m, List.of(new plumbline.solve.stiffness.StiffnessEngine())), new TolerancePolicy(Double.NaN));
+    }
+
+    @Test
+    void aCombinationIsPreferredToABiggerLoadCaseAndAmongCasesTheBiggestMomentWins() {
+        // L alone (w = 100 kN/m, M = 450 kN*m) is bigger than the combination C = 1.0 D (M = 45 kN*m)
+        String loads = """
+                loads:
+                  D: {type: dead, member_loads: [{member: M1, w: -10}]}
+                  L: {type: live, member_loads: [{member: M1, w: -100}]}
+                """;
+        assertEquals(List.of("C"), DrawnLoadSets.choose(beam(loads + "combinations: {C: {D: 1.0}}\n")));
+        assertEquals(List.of("L"), DrawnLoadSets.choose(beam(loads)));
+        // a tie (two equal combinations) keeps the first
+        assertEquals(List.of("C1"), DrawnLoadSets.choose(beam(loads + "combinations: {C1: {D: 1.0}, C2: {D: 1.0}}\n")));
+    }
 }

@@ -48,6 +48,9 @@ class ReviewEdgesTest {
                     - {member: M1, combo: envelope, M_abs: 45}
                 """);
         for (ClaimResult c : r.claims()) assertEquals("C1", c.governing(), c.claim().id());
+        assertEquals(Map.of("D", 1.0), r.analysis().factors("C2"));
+        assertEquals(Map.of("D", 1.0), r.analysis().factors("D"), "a load case on its own is itself at factor 1");
+        assertEquals(null, r.analysis().factors("C3"));
         assertEquals(30e3, r.claims().get(0).computed(), 1e-6);
         assertEquals(45e3, r.claims().get(2).computed(), 1e-6);
     }
