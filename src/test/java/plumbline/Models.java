@@ -17,6 +17,23 @@ public final class Models {
             sections: {G: {A: 0.01, I: 1.0e-4, material: s}}
             """;
 
+    /** {@link #HEAD} and a simple beam A (0, 0) pinned to B (6, 0) on a roller, one member M1. */
+    public static final String SIMPLE_BEAM = HEAD + """
+            nodes: {A: [0, 0], B: [6, 0]}
+            supports: {A: pinned, B: roller}
+            members: {M1: {from: A, to: B, section: G}}
+            """;
+
+    /** {@link #HEAD} and three equal 6 m spans S1, S2, S3 on supports A (pinned), B, C, D (rollers). */
+    public static final String THREE_SPANS = HEAD + """
+            nodes: {A: [0, 0], B: [6, 0], C: [12, 0], D: [18, 0]}
+            supports: {A: pinned, B: roller, C: roller, D: roller}
+            members:
+              S1: {from: A, to: B, section: G}
+              S2: {from: B, to: C, section: G}
+              S3: {from: C, to: D, section: G}
+            """;
+
     private Models() {
     }
 

@@ -92,29 +92,13 @@ final class Fields {
         String best = null;
         int bestD = 3;
         for (String c : candidates) {
-            int d = c.equalsIgnoreCase(key) ? 0 : distance(key.toLowerCase(), c.toLowerCase());
+            int d = c.equalsIgnoreCase(key) ? 0 : Units.editDistance(key.toLowerCase(), c.toLowerCase());
             if (d < bestD || (d == bestD && best != null && c.compareTo(best) < 0)) {
                 bestD = d;
                 best = c;
             }
         }
         return bestD <= Math.min(2, Math.max(1, key.length() / 2)) ? best : null;
-    }
-
-    private static int distance(String a, String b) {
-        int[] prev = new int[b.length() + 1], cur = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) prev[j] = j;
-        for (int i = 1; i <= a.length(); i++) {
-            cur[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int c = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
-                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + c);
-            }
-            int[] t = prev;
-            prev = cur;
-            cur = t;
-        }
-        return prev[b.length()];
     }
 
     boolean has(String key) {

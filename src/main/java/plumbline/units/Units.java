@@ -139,11 +139,12 @@ public final class Units {
         List<String> all = new ArrayList<>(SYMBOLS.keySet());
         all.addAll(TRADE_WORDS.keySet());
         String low = s.toLowerCase(Locale.ROOT);
-        all.sort(Comparator.comparingInt((String k) -> distance(low, k.toLowerCase(Locale.ROOT))).thenComparing(k -> k));
+        all.sort(Comparator.comparingInt((String k) -> editDistance(low, k.toLowerCase(Locale.ROOT))).thenComparing(k -> k));
         return all.subList(0, 3);
     }
 
-    private static int distance(String a, String b) {
+    /** The edit (Levenshtein) distance between two strings: insertions, deletions and substitutions. */
+    public static int editDistance(String a, String b) {
         int[] prev = new int[b.length() + 1], cur = new int[b.length() + 1];
         for (int j = 0; j <= b.length(); j++) prev[j] = j;
         for (int i = 1; i <= a.length(); i++) {

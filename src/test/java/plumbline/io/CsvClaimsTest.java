@@ -25,10 +25,7 @@ class CsvClaimsTest {
     @TempDir
     Path dir;
 
-    static final Model MODEL = Models.yaml(Models.HEAD + """
-            nodes: {A: [0, 0], B: [6, 0]}
-            supports: {A: pinned, B: roller}
-            members: {M1: {from: A, to: B, section: G}}
+    static final Model MODEL = Models.yaml(Models.SIMPLE_BEAM + """
             loads: {D: {type: dead, member_loads: [{member: M1, w: -10}]}}
             """);
 

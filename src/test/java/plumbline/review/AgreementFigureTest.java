@@ -140,10 +140,7 @@ class AgreementFigureTest {
         // a simple beam (EA = 200 GPa x 0.01 m2 = 2e9 N, L = 6 m) whose roller settles 10 mm: it turns as a rigid
         // body, so every force is rounding. Forces are then judged against 1e-5 EA u / L = 1e-5 x 2e9 x 0.01 / 6 =
         // 33.33 N, moments against 1e-5 EA u = 200 N*m, translations against u = 0.01 m, rotations against u / L
-        Model m = Models.yaml(Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        Model m = Models.yaml(Models.SIMPLE_BEAM + """
                 loads: {S: {type: settlement, settlements: [{node: B, uy: -10 mm}]}}
                 """);
         Solution base = new StiffnessEngine().solve(m).cases().get("S");
@@ -172,10 +169,7 @@ class AgreementFigureTest {
     @Test
     void aDifferenceWhereNothingActsIsJudgedAgainstItself() {
         // no load, no movement: every scale is the rounding floor, 1e-12 of EA; a planted newton is far beyond it
-        Model m = Models.yaml(Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        Model m = Models.yaml(Models.SIMPLE_BEAM + """
                 loads: {Z: {type: dead, node_loads: [{node: B, Fx: 0}]}}
                 """);
         Solution base = new StiffnessEngine().solve(m).cases().get("Z");

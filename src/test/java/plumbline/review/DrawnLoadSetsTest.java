@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import plumbline.Models;
+import plumbline.solve.stiffness.StiffnessEngine;
 
 /**
  * The load sets the report draws, on the simple beam of {@link ReviewTest} (L = 6 m, dead
@@ -45,12 +47,8 @@ class DrawnLoadSetsTest {
     }
 
     static Review beam(String loads) {
-        var m = plumbline.Models.yaml(plumbline.Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
-                """ + loads);
-        return Review.of(Analysis.of(m, List.of(new plumbline.solve.stiffness.StiffnessEngine())), new TolerancePolicy(Double.NaN));
+        var m = Models.yaml(Models.SIMPLE_BEAM + loads);
+        return Review.of(Analysis.of(m, List.of(new StiffnessEngine())), new TolerancePolicy(Double.NaN));
     }
 
     @Test

@@ -195,13 +195,7 @@ class ExplanationsRulesTest {
     void patternLoadingOmitted() {
         // three equal 6 m spans, live 10 kN/m patterned: every span on gives R_A = 0.4 wL = 24 kN (upper bound 27);
         // dead 5 kN/m on every span: R_A = 12 kN
-        Review r = ExplanationsTest.review(Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0], C: [12, 0], D: [18, 0]}
-                supports: {A: pinned, B: roller, C: roller, D: roller}
-                members:
-                  S1: {from: A, to: B, section: G}
-                  S2: {from: B, to: C, section: G}
-                  S3: {from: C, to: D, section: G}
+        Review r = ExplanationsTest.review(Models.THREE_SPANS + """
                 loads:
                   L: {type: live, pattern: true, member_loads: [{members: [S1, S2, S3], w: -10}]}
                   G: {type: dead, member_loads: [{members: [S1, S2, S3], w: -5}]}

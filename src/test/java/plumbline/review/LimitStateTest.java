@@ -20,10 +20,7 @@ import plumbline.validate.ClaimCheck;
  */
 class LimitStateTest {
 
-    static final String JOIST = Models.HEAD + """
-            nodes: {A: [0, 0], B: [6, 0]}
-            supports: {A: pinned, B: roller}
-            members: {M1: {from: A, to: B, section: G}}
+    static final String JOIST = Models.SIMPLE_BEAM + """
             loads:
               D: {type: dead, member_loads: [{member: M1, w: -10}]}
               L: {type: live, member_loads: [{member: M1, w: -5}]}
@@ -54,10 +51,7 @@ class LimitStateTest {
 
     @Test
     void anEnvelopeOfALimitStateWithoutCombinationsIsRefused() {
-        Model m = Models.yaml(Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        Model m = Models.yaml(Models.SIMPLE_BEAM + """
                 loads: {D: {type: dead, member_loads: [{member: M1, w: -10}]}}
                 combinations: {C1: {D: 1.35}}
                 claims:

@@ -31,13 +31,7 @@ import plumbline.solve.stiffness.StiffnessEngine;
 class PatternEnvelopeTest {
 
     static Analysis analysis(Engine engine) {
-        return Analysis.of(Models.yaml(Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0], C: [12, 0], D: [18, 0]}
-                supports: {A: pinned, B: roller, C: roller, D: roller}
-                members:
-                  S1: {from: A, to: B, section: G}
-                  S2: {from: B, to: C, section: G}
-                  S3: {from: C, to: D, section: G}
+        return Analysis.of(Models.yaml(Models.THREE_SPANS + """
                 loads:
                   L: {type: live, pattern: true, member_loads: [{members: [S1, S2, S3], w: -10}]}
                 """), List.of(engine));
@@ -107,13 +101,7 @@ class PatternEnvelopeTest {
     void reactionBoundsAreClaimedByName() {
         // FORMAT 4.1: Fy_max and Fy_min at A are the upper 27 kN and lower -3 kN above; a minimum reaction of
         // 0.64 kN claimed as Fy (not Fy_min) would be compared with the upper bound and flagged
-        String model = Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0], C: [12, 0], D: [18, 0]}
-                supports: {A: pinned, B: roller, C: roller, D: roller}
-                members:
-                  S1: {from: A, to: B, section: G}
-                  S2: {from: B, to: C, section: G}
-                  S3: {from: C, to: D, section: G}
+        String model = Models.THREE_SPANS + """
                 loads:
                   L: {type: live, pattern: true, member_loads: [{members: [S1, S2, S3], w: -10}]}
                 combinations: {C1: {L: 1.0}, C2: {L: 0.5}}
@@ -145,13 +133,7 @@ class PatternEnvelopeTest {
     @Test
     void aMinimumReactionClaimedAsAPlainValueIsToldWhy() {
         // dead 5 kN/m on every span adds 0.4 wL = 12 kN at A: the bounds are 39 and 9 kN; "Fy: 9" is compared with 39
-        Review r = Review.of(Analysis.of(Models.yaml(Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0], C: [12, 0], D: [18, 0]}
-                supports: {A: pinned, B: roller, C: roller, D: roller}
-                members:
-                  S1: {from: A, to: B, section: G}
-                  S2: {from: B, to: C, section: G}
-                  S3: {from: C, to: D, section: G}
+        Review r = Review.of(Analysis.of(Models.yaml(Models.THREE_SPANS + """
                 loads:
                   L: {type: live, pattern: true, member_loads: [{members: [S1, S2, S3], w: -10}]}
                   G: {type: dead, member_loads: [{members: [S1, S2, S3], w: -5}]}

@@ -17,10 +17,7 @@ import plumbline.solve.stiffness.StiffnessEngine;
 class ReviewTest {
 
     static Review review(String claims, double cliTolerance) {
-        Model m = Models.yaml(plumbline.Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        Model m = Models.yaml(Models.SIMPLE_BEAM + """
                 loads:
                   D: {type: dead, member_loads: [{member: M1, w: -10}]}
                   L: {type: live, member_loads: [{member: M1, w: -5}]}

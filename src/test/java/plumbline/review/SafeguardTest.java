@@ -205,10 +205,7 @@ class SafeguardTest {
 
     @Test
     void noClaimsIsNeverOk() {
-        Model bare = Models.yaml(Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        Model bare = Models.yaml(Models.SIMPLE_BEAM + """
                 loads: {D: {type: dead, member_loads: [{member: M1, w: -10}]}}
                 """);
         Review r = Review.of(Analysis.of(bare, List.of(new StiffnessEngine(), new ForceEngine())), TolerancePolicy.none());

@@ -19,10 +19,7 @@ import plumbline.model.Model;
 class StandardCombinationsTest {
 
     static Model model(String sets) {
-        return Models.yaml(plumbline.Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        return Models.yaml(Models.SIMPLE_BEAM + """
                 loads:
                   D1: {type: dead, member_loads: [{member: M1, w: -5}]}
                   D2: {type: dead, member_loads: [{member: M1, w: -1}]}
@@ -183,18 +180,12 @@ class StandardCombinationsTest {
 
     @Test
     void withoutDeadLoadNothingIsFormedAndDeadAloneGivesItsOwnCombination() {
-        Model noDead = Models.yaml(plumbline.Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        Model noDead = Models.yaml(Models.SIMPLE_BEAM + """
                 loads: {L: {type: live, member_loads: [{member: M1, w: -4}]}}
                 standard_combinations: [asce7-strength, asce7-asd, en1990-6.10, en1990-6.10ab]
                 """);
         assertTrue(StandardCombinations.expand(noDead).isEmpty());
-        Model deadOnly = Models.yaml(plumbline.Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        Model deadOnly = Models.yaml(Models.SIMPLE_BEAM + """
                 loads: {D: {type: dead, member_loads: [{member: M1, w: -4}]}}
                 standard_combinations: [asce7-strength, asce7-asd, en1990-6.10]
                 """);
@@ -204,10 +195,7 @@ class StandardCombinationsTest {
     }
 
     static Model everyType(String set) {
-        return Models.yaml(plumbline.Models.HEAD + """
-                nodes: {A: [0, 0], B: [6, 0]}
-                supports: {A: pinned, B: roller}
-                members: {M1: {from: A, to: B, section: G}}
+        return Models.yaml(Models.SIMPLE_BEAM + """
                 loads:
                   D: {type: dead, member_loads: [{member: M1, w: -5}]}
                   L: {type: live, member_loads: [{member: M1, w: -4}]}
