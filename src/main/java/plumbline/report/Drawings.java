@@ -252,13 +252,8 @@ public final class Drawings {
     /** Direction (x right, y up) in which a load of the given sign acts. */
     private static double[] direction(LoadDirection dir, double ex, double ey, double sign) {
         double s = sign == 0 ? 1 : sign;
-        return switch (dir) {
-            case X -> new double[]{s, 0};
-            case Y -> new double[]{0, s};
-            case GRAVITY -> new double[]{0, -s};
-            case LOCAL_X -> new double[]{s * ex, s * ey};
-            case LOCAL_Y -> new double[]{-s * ey, s * ex};
-        };
+        double[] u = dir.unit(ex, ey);
+        return new double[]{s * u[0], s * u[1]};
     }
 
     /** Which function a diagram shows. */

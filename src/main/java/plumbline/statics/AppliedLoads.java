@@ -75,12 +75,12 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
                     total = scale * 0.5 * (w.w1NPerM() + w.w2NPerM()) * h;
                     firstMoment = scale * (w.w1NPerM() * h * (w.fromM() + h / 2)
                             + (w.w2NPerM() - w.w1NPerM()) * h / 2 * (w.fromM() + 2 * h / 3));
-                    d = unit(w.dir(), ex, ey);
+                    d = w.dir().unit(ex, ey);
                 } else {
                     MemberLoad.Point p = (MemberLoad.Point) l;
                     total = p.forceN();
                     firstMoment = p.forceN() * p.atM();
-                    d = unit(p.dir(), ex, ey);
+                    d = p.dir().unit(ex, ey);
                 }
                 r[0] += k * total * d[0];
                 r[1] += k * total * d[1];
@@ -100,16 +100,5 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
             }
         }
         return out;
-    }
-
-    /** Unit vector of a load direction on a member with unit vector (ex, ey); gravity is -y. */
-    static double[] unit(LoadDirection dir, double ex, double ey) {
-        return switch (dir) {
-            case X -> new double[]{1, 0};
-            case Y -> new double[]{0, 1};
-            case GRAVITY -> new double[]{0, -1};
-            case LOCAL_X -> new double[]{ex, ey};
-            case LOCAL_Y -> new double[]{-ey, ex};
-        };
     }
 }
