@@ -250,7 +250,9 @@ public final class Console {
     static String explanations(Review r) {
         StringBuilder sb = new StringBuilder();
         if (r.explanations().isEmpty()) {
-            sb.append(wrap("Explanations: no single change tried explains two or more flagged claims, or all of them", "  "));
+            boolean eachHasOne = r.claims().stream().allMatch(c -> c.status() == ClaimResult.Status.OK || c.ownDiagnosis() != null);
+            sb.append(wrap("Explanations of the set: no one change tried brings two or more flagged claims, or every claim, "
+                    + "within tolerance" + (eachHasOne ? "; see each flagged claim's likely cause above" : ""), "  "));
             return sb.toString();
         }
         sb.append(wrap("Explanations (each one change, scored on all " + r.claims().size() + " claims):", "  "));

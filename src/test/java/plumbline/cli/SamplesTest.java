@@ -25,6 +25,7 @@ class SamplesTest {
             "portal-frame.yaml, portal-frame-claims.yaml, R-E-ULS-W-Fx",
             "office-floor-beam.yaml, office-floor-beam-claims.yaml, M-S2-asce7-strength/2-M_max",
             "gable-frame-us.yaml, gable-frame-us-claims.csv, R-A-S-Fy R-A-S-Fx",
+            "warehouse-joist.yaml, warehouse-joist-claims.csv, R-B-ULS-2-Fy_max M-S1-ULS-2-M_max",
     })
     @SuppressWarnings("unchecked")
     void sampleRuns(String model, String claims, String slip) throws Exception {
