@@ -432,7 +432,9 @@ public final class PdfReport {
         }
         for (String combo : combos) {
             LoadSet set = review.analysis().loadSets().stream().filter(s -> s.name().equals(combo)).findFirst().orElse(null);
-            para(doc, combo + (set != null ? "  -  " + set.origin() + ": " + factors(set) : "  -  envelope over all combinations"), bold);
+            LimitState state = LimitState.ofEnvelope(combo);
+            String envelope = state == LimitState.NONE ? "envelope over all combinations" : "envelope over the " + state + " combinations";
+            para(doc, combo + (set != null ? "  -  " + set.origin() + ": " + factors(set) : "  -  " + envelope), bold);
             PdfPTable t = table(new float[]{0.35f, 1.8f, 1.05f, 1.05f, 1.05f, 0.75f, 0.95f, 1.2f, 2.5f},
                     "", "Quantity", "Claimed", "Stiffness", "Force", "Diff.", "Tolerance", "Status", "Diagnosis / governing");
             for (ClaimResult c : review.claims()) {
