@@ -119,4 +119,19 @@ class PolyAndPiecewiseTest {
         assertEquals(List.of(), alone.partsOn());
         assertEquals(1, Envelope.min(jump(), List.of()).value(), 0);
     }
+
+    @Test
+    void valuesAtABreakpointFromEitherSide() {
+        // three pieces, constant 1 on [0, 1), 2 on [1, 3), 3 on [3, 4]: a jump as under a point load
+        Piecewise p = new Piecewise(new double[]{0, 1, 3, 4}, new Poly[]{new Poly(1), new Poly(2), new Poly(3)});
+        assertEquals(1, p.at(0), 0);
+        assertEquals(2, p.at(1), 0, "at a breakpoint, the piece to the right");
+        assertEquals(1, p.atLeft(1), 0, "from the left, the piece before");
+        assertEquals(2, p.atLeft(3), 0);
+        assertEquals(3, p.at(3), 0);
+        assertEquals(2, p.atLeft(2), 0, "inside a piece both sides agree");
+        assertEquals(3, p.atLeft(3.5), 0);
+        assertEquals(3, p.atLeft(4), 0, "the end of the member: the last piece");
+        assertEquals(1, p.atLeft(0), 0, "the start: the first piece");
+    }
 }
