@@ -15,10 +15,12 @@ import java.util.function.ToDoubleFunction;
 import plumbline.model.Claim;
 import plumbline.model.LimitState;
 import plumbline.model.LoadCase;
+import plumbline.model.Material;
 import plumbline.model.Member;
 import plumbline.model.MemberLoad;
 import plumbline.model.Model;
 import plumbline.model.Quantity;
+import plumbline.model.Section;
 import plumbline.model.Support;
 import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
@@ -41,7 +43,7 @@ import plumbline.units.Dimension;
  * self-weight counted twice, pattern loading omitted;</li>
  * <li>to the structure, solved again: self-weight omitted, loads per sloped length instead
  * of per plan, one support's fixity or all of them, a member load put on another member of
- * the same length and direction.</li>
+ * the same length and direction, a material's E or a section's I or A in another unit.</li>
  * </ul>
  * Each trial is scored on every claim: the flagged claims it brings within their own
  * tolerance and the agreeing claims it would push out. A trial is kept when it explains two
@@ -55,6 +57,10 @@ final class Explanations {
     static final int MODEL_TRIAL_MEMBER_LIMIT = 300;
     /** At most this many member-load moves are tried. */
     static final int MOVED_LOAD_TRIALS = 60;
+    /** Section and material properties in another unit are solved again for models up to this size. */
+    static final int PROPERTY_TRIAL_MEMBER_LIMIT = 100;
+    /** ksi in MPa (NIST SP 811 Appendix B: 1 ksi = 6.894757 MPa). */
+    static final double KSI_IN_MPA = 6.894757;
     /** Loads are moved only in load cases with at most this many member loads. */
     static final int MOVABLE_LOADS_PER_CASE = 12;
     /** The explanations reported, best first. */
@@ -472,6 +478,51 @@ final class Explanations {
             resolvedTrial("every pinned support taken as fixed (" + names(pinned) + ")", x -> Diagnosis.withFixity(x, pinned), true);
         }
         movedLoads();
+        if (m.members().size() <= PROPERTY_TRIAL_MEMBER_LIMIT) properties();
+    }
+
+    /**
+     * A section or material property entered in another unit: E a thousand times off (GPa
+     * and MPa) or by 6.895 (ksi and MPa), I by 10^4 (cm4 and mm4), A by 100 (cm2 and mm2).
+     * Deflections scale with them, and in an indeterminate structure the forces move too.
+     */
+    private void properties() {
+        Model m = a.model();
+        record Slip(double factor, String words) {
+        }
+        List<Slip> eSlips = List.of(new Slip(1e3, "1000 times the model's (GPa and MPa)"), new Slip(1e-3, "1/1000 of the model's (MPa and GPa)"),
+                new Slip(KSI_IN_MPA, "6.895 times the model's (ksi read as MPa)"), new Slip(1 / KSI_IN_MPA, "1/6.895 of the model's (MPa read as ksi)"));
+        for (Material mat : m.materials().values()) {
+            for (Slip sl : eSlips) {
+                resolvedTrial("E of material " + mat.name() + " " + sl.words, x -> withMaterial(x, new Material(mat.name(),
+                        mat.ePa() * sl.factor, mat.weightDensityNPerM3(), mat.alphaPerK(), mat.at())), true);
+            }
+        }
+        for (Section sec : m.sections().values()) {
+            for (Slip sl : List.of(new Slip(1e4, "10^4 times the model's (cm4 and mm4)"), new Slip(1e-4, "1/10^4 of the model's (mm4 and cm4)"))) {
+                if (!Double.isFinite(sec.inertiaM4())) continue;
+                resolvedTrial("I of section " + sec.name() + " " + sl.words, x -> withSection(x, new Section(sec.name(), sec.areaM2(),
+                        sec.inertiaM4() * sl.factor, sec.depthM(), sec.material(), sec.at())), true);
+            }
+            for (Slip sl : List.of(new Slip(100, "100 times the model's (cm2 and mm2)"), new Slip(0.01, "1/100 of the model's (mm2 and cm2)"))) {
+                resolvedTrial("A of section " + sec.name() + " " + sl.words, x -> withSection(x, new Section(sec.name(),
+                        sec.areaM2() * sl.factor, sec.inertiaM4(), sec.depthM(), sec.material(), sec.at())), true);
+            }
+        }
+    }
+
+    private static Model withMaterial(Model x, Material mat) {
+        Map<String, Material> ms = new LinkedHashMap<>(x.materials());
+        ms.put(mat.name(), mat);
+        return new Model(x.file(), x.job(), x.units(), ms, x.sections(), x.nodes(), x.supports(), x.members(), x.loadCases(),
+                x.combinations(), x.standardCombinations(), x.redundants(), List.of());
+    }
+
+    private static Model withSection(Model x, Section sec) {
+        Map<String, Section> ss = new LinkedHashMap<>(x.sections());
+        ss.put(sec.name(), sec);
+        return new Model(x.file(), x.job(), x.units(), x.materials(), ss, x.nodes(), x.supports(), x.members(), x.loadCases(),
+                x.combinations(), x.standardCombinations(), x.redundants(), List.of());
     }
 
     private static String names(List<Support> ss) {

@@ -253,4 +253,21 @@ class ExplanationsRulesTest {
         assertTrue(Explanations.alike(m, m.member("M1"), m.member("M6")), "within 1% is the same length");
         assertFalse(Explanations.alike(m, m.member("M4"), m.member("M7")), "a column 1.7% longer is not");
     }
+
+    @Test
+    void aModulusInTheWrongUnit() {
+        // E = 200 MPa where 200 GPa was meant: 5wL^4/384EI = 8.4375 mm becomes 8.4375 m; the reaction does not move
+        Review r = ExplanationsTest.review(SIMPLE + "loads: {D: {type: dead, member_loads: [{members: [M1, M2], w: -10}]}}\n", """
+                claims:
+                  reactions:
+                    - {node: A, combo: D, Fy: 30}
+                  members:
+                    - {member: M1, combo: D, deflection: 8.4375}
+                  displacements:
+                    - {node: C, combo: D, uy: -8.4375}
+                """);
+        Explanation x = named(r, "the model solved with E of material s 1/1000 of the model's (MPa and GPa)");
+        assertTrue(x.allOkAfter());
+        assertEquals(2, x.explains().size());
+    }
 }
