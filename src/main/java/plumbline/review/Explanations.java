@@ -38,8 +38,9 @@ import plumbline.units.Dimension;
  * supports, moments hogging-positive, compression positive, displacements downward
  * positive), one unit for every claim of a dimension, or one scale over the whole set;</li>
  * <li>to the loads, by superposition of the load-case solutions already made (linear
- * elasticity): a load case left out, doubled or scaled everywhere, a case missing from or
- * added to one combination, the load factors left out of one or every combination,
+ * elasticity): a load case or one member load left out, doubled or scaled, a case missing
+ * from or added to one combination, the load factors left out of one or every combination,
+ * a standard set read as its counterpart (allowable stress against strength),
  * self-weight counted twice, pattern loading omitted;</li>
  * <li>to the structure, solved again: self-weight omitted, loads per sloped length instead
  * of per plan, one support's fixity or all of them, a member load put on another member of
@@ -109,6 +110,7 @@ final class Explanations {
         if (a.model().members().size() <= MODEL_TRIAL_MEMBER_LIMIT) {
             x.loadCases(claimedEquilibrium);
             x.combinations();
+            x.otherStandardSets();
             x.patternOmitted();
             if (variantEngine != null) x.resolved();
         }
@@ -415,6 +417,40 @@ final class Explanations {
         }
     }
 
+    /** Standard sets a claimed combination may really belong to: strength against allowable stress, 6.10 against 6.10a/b. */
+    private static final List<String[]> OTHER_SET = List.of(new String[]{"asce7-strength", "asce7-asd"},
+            new String[]{"asce7-asd", "asce7-strength"}, new String[]{"en1990-6.10", "en1990-6.10ab"},
+            new String[]{"en1990-6.10ab", "en1990-6.10"});
+
+    /**
+     * The claims worked with another standard's set: each claimed combination of set S read as
+     * the combination of the same number (and actions) of set T, formed from the load cases
+     * already solved (ASD loads against strength combinations, or the reverse).
+     */
+    private void otherStandardSets() {
+        Model m = a.model();
+        EngineResult er = a.engines().get(engine);
+        for (String[] pair : OTHER_SET) {
+            String from = pair[0], to = pair[1];
+            if (!m.standardCombinations().contains(from)) continue;
+            Model other = new Model(m.file(), m.job(), m.units(), m.materials(), m.sections(), m.nodes(), m.supports(), m.members(),
+                    m.loadCases(), List.of(), List.of(to), m.redundants(), List.of());
+            Map<String, LoadSet> byName = new HashMap<>();
+            for (LoadSet s : StandardCombinations.expand(other)) byName.put(s.name(), s);
+            Map<String, LoadSetResult> made = new HashMap<>();
+            trials.add(new Trial("the claims of the " + from + " combinations are those of the " + to + " combinations of the same "
+                    + "number (" + (from.startsWith("asce7") ? "allowable-stress against strength design, or the reverse"
+                    : "expression 6.10 against 6.10a/6.10b") + ")", List.of("model: " + from + " read as " + to), r -> {
+                        String combo = r.claim().combo();
+                        if (!combo.startsWith(from + "/")) return Double.NaN;
+                        LoadSet s = byName.get(to + combo.substring(from.length()));
+                        if (s == null) return Double.NaN;
+                        LoadSetResult res = made.computeIfAbsent(s.name(), k -> Analysis.result(m, a.engineModel(), er, s, functions()));
+                        return Review.of(res, r.claim()).value();
+                    }));
+        }
+    }
+
     private static Map<String, Double> unit(Map<String, Double> factors) {
         Map<String, Double> out = new LinkedHashMap<>();
         for (String k : factors.keySet()) out.put(k, 1.0);
@@ -537,25 +573,35 @@ final class Explanations {
      */
     private void movedLoads() {
         Model m = a.model();
-        record Move(LoadCase lc, MemberLoad load, Member from, Member to) {
+        record Move(LoadCase lc, int load, Member from, Member to) {
         }
+        record One(LoadCase lc, MemberLoad load) {
+        }
+        List<One> singles = new ArrayList<>();
         List<Move> moves = new ArrayList<>();
         for (LoadCase lc : m.loadCases()) {
             // a load spread over many members (a floor load on every span) is not "on the wrong span"
             if (lc.pattern() || lc.memberLoads().size() > MOVABLE_LOADS_PER_CASE) continue;
             for (MemberLoad l : lc.memberLoads()) {
+                singles.add(new One(lc, l));
                 Member from = m.member(l.member());
                 for (Member to : m.members().values()) {
-                    if (to != from && alike(m, from, to) && moves.size() < MOVED_LOAD_TRIALS) moves.add(new Move(lc, l, from, to));
+                    if (to != from && alike(m, from, to) && moves.size() < MOVED_LOAD_TRIALS) {
+                        moves.add(new Move(lc, singles.size() - 1, from, to));
+                    }
                 }
             }
         }
-        if (moves.isEmpty()) return;
+        if (singles.isEmpty()) return;
         List<LoadCase> probes = new ArrayList<>();
+        for (int k = 0; k < singles.size(); k++) {
+            One o = singles.get(k);
+            probes.add(new LoadCase("load#" + k, o.lc.type(), false, false, List.of(o.load), List.of(), List.of(), List.of(), o.lc.at()));
+        }
         for (int k = 0; k < moves.size(); k++) {
             Move mv = moves.get(k);
-            probes.add(new LoadCase("where#" + k, mv.lc.type(), false, false, List.of(mv.load), List.of(), List.of(), List.of(), mv.lc.at()));
-            probes.add(new LoadCase("moved#" + k, mv.lc.type(), false, false, List.of(mv.load.on(mv.to.name())), List.of(), List.of(),
+            MemberLoad l = singles.get(mv.load).load;
+            probes.add(new LoadCase("moved#" + k, mv.lc.type(), false, false, List.of(l.on(mv.to.name())), List.of(), List.of(),
                     List.of(), mv.lc.at()));
         }
         Model probe = new Model(m.file(), m.job(), m.units(), m.materials(), m.sections(), m.nodes(), m.supports(), m.members(),
@@ -568,11 +614,26 @@ final class Explanations {
         all.addAll(probes);
         Model withProbes = new Model(em.file(), em.job(), em.units(), em.materials(), em.sections(), em.nodes(), em.supports(),
                 em.members(), all, List.of(), List.of(), em.redundants(), List.of());
+        // each member load left out, or counted twice: case' = case -/+ (the load alone)
+        for (int k = 0; k < singles.size(); k++) {
+            One o = singles.get(k);
+            Solution alone = solved.cases().get("load#" + k);
+            String what = "the " + kind(o.load) + " load of case " + o.lc.name() + " on member " + o.load.member();
+            for (double extra : new double[]{-1, 1}) {
+                trials.add(new Trial(what + (extra < 0 ? " left out" : " counted twice"), List.of("model: " + what
+                        + (extra < 0 ? " removed" : " doubled")), world(casesWith(o.lc.name(), s -> {
+                            Map<Solution, Double> parts = new LinkedHashMap<>();
+                            parts.put(s, 1.0);
+                            parts.put(alone, extra);
+                            return Superposition.combine(withProbes, s.name(), parts, functions());
+                        }), a.loadSets(), setsWith(o.lc.name()), withProbes)));
+            }
+        }
         for (int k = 0; k < moves.size(); k++) {
             Move mv = moves.get(k);
-            Solution where = solved.cases().get("where#" + k), moved = solved.cases().get("moved#" + k);
-            String kind = mv.load instanceof MemberLoad.Distributed ? "distributed" : mv.load instanceof MemberLoad.Point ? "point" : "couple";
-            trials.add(new Trial("the " + kind + " load of case " + mv.lc.name() + " on member " + mv.to.name() + " instead of "
+            MemberLoad l = singles.get(mv.load).load;
+            Solution where = solved.cases().get("load#" + mv.load), moved = solved.cases().get("moved#" + k);
+            trials.add(new Trial("the " + kind(l) + " load of case " + mv.lc.name() + " on member " + mv.to.name() + " instead of "
                     + mv.from.name(), List.of("model: a load of " + mv.lc.name() + " moved from " + mv.from.name() + " to " + mv.to.name()),
                     world(casesWith(mv.lc.name(), s -> {
                         Map<Solution, Double> parts = new LinkedHashMap<>();
@@ -582,6 +643,10 @@ final class Explanations {
                         return Superposition.combine(withProbes, s.name(), parts, functions());
                     }), a.loadSets(), setsWith(mv.lc.name()), withProbes)));
         }
+    }
+
+    private static String kind(MemberLoad l) {
+        return l instanceof MemberLoad.Distributed ? "distributed" : l instanceof MemberLoad.Point ? "point" : "couple";
     }
 
     /** Same length within 1% and the same direction: a load moved between them keeps its meaning. */

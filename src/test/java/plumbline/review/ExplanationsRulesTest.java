@@ -270,4 +270,41 @@ class ExplanationsRulesTest {
         assertTrue(x.allOkAfter());
         assertEquals(2, x.explains().size());
     }
+
+    @Test
+    void allowableStressValuesAgainstStrengthCombinations() {
+        // ASCE 7-16 2.3.1(2) 1.2 D + 1.6 L against 2.4.1(2) D + L: w = 20 against 15 kN/m, R = 60 against 45 kN,
+        // M = 90 against 67.5 kN*m; (1) 1.4 D against D: R = 42 against 30 kN
+        Review r = ReviewTest.review("""
+                claims:
+                  reactions:
+                    - {node: A, combo: asce7-strength/2, Fy: 45}
+                    - {node: A, combo: asce7-strength/1, Fy: 30}
+                    - {node: A, combo: D, Fy: 30}
+                  members:
+                    - {member: M1, combo: asce7-strength/2, M_max: 67.5}
+                """, Double.NaN);
+        Explanation x = named(r, "the claims of the asce7-strength combinations are those of the asce7-asd combinations");
+        assertTrue(x.allOkAfter());
+        assertEquals(3, x.explains().size());
+    }
+
+    @Test
+    void oneMemberLoadLeftOut() {
+        // 10 kN/m on the left half only (M1, 0 to 3 m of 6): R_A = w a (L - a/2) / L = 22.5 kN, R_B = 7.5 kN
+        Review r = ExplanationsTest.review(SIMPLE + """
+                loads:
+                  D: {type: dead, member_loads: [{members: [M1, M2], w: -10}]}
+                  L: {type: live, member_loads: [{members: [M1, M2], w: -5}]}
+                """, """
+                claims:
+                  reactions:
+                    - {node: A, combo: D, Fy: 22.5}
+                    - {node: B, combo: D, Fy: 7.5}
+                    - {node: A, combo: L, Fy: 15}
+                """);
+        Explanation x = r.explanations().get(0);
+        assertEquals("the distributed load of case D on member M2 left out", x.sentence());
+        assertTrue(x.allOkAfter());
+    }
 }
