@@ -51,38 +51,27 @@ final class LoadsReader {
                 memberLoad(items.get(i), path + ".member_loads[" + i + "]", u, members, nodes, ml);
             }
             List<NodeLoad> nl = new ArrayList<>();
-            items = f.list("node_loads", false, "a list of node loads");
-            for (int i = 0; i < items.size(); i++) {
-                String p = path + ".node_loads[" + i + "]";
-                Fields g = Fields.of(items.get(i), p, problems, List.of("node", "Fx", "Fy", "Mz"), "a map such as {node: B, Fy: -20}");
-                if (g == null) continue;
+            for (Fields g : entries(f, path, "node_loads", "a list of node loads", List.of("node", "Fx", "Fy", "Mz"),
+                    "a map such as {node: B, Fy: -20}")) {
                 String node = g.text("node", true, "a node name");
                 GeometryReader.nodeRef(g, "node", node, nodes);
                 double fx = orZero(g, "Fx", Dimension.FORCE, u);
                 double fy = orZero(g, "Fy", Dimension.FORCE, u);
                 double mz = orZero(g, "Mz", Dimension.MOMENT, u);
                 if (!g.has("Fx") && !g.has("Fy") && !g.has("Mz")) g.missing("Fy", "at least one of Fx, Fy, Mz");
-                nl.add(new NodeLoad(node, fx, fy, mz, items.get(i).at()));
+                nl.add(new NodeLoad(node, fx, fy, mz, g.map.at()));
             }
             List<Temperature> temps = new ArrayList<>();
-            items = f.list("temperatures", false, "a list of member temperatures");
-            for (int i = 0; i < items.size(); i++) {
-                String p = path + ".temperatures[" + i + "]";
-                Fields g = Fields.of(items.get(i), p, problems, List.of("member", "members", "uniform", "gradient"),
-                        "a map such as {member: M1, uniform: 25 degC, gradient: 10 degC}");
-                if (g == null) continue;
+            for (Fields g : entries(f, path, "temperatures", "a list of member temperatures", List.of("member", "members", "uniform",
+                    "gradient"), "a map such as {member: M1, uniform: 25 degC, gradient: 10 degC}")) {
                 double uni = orZero(g, "uniform", Dimension.TEMPERATURE, u);
                 double grad = orZero(g, "gradient", Dimension.TEMPERATURE, u);
                 if (!g.has("uniform") && !g.has("gradient")) g.missing("uniform", "uniform and/or gradient");
-                for (String m : memberNames(g, members)) temps.add(new Temperature(m, uni, grad, items.get(i).at()));
+                for (String m : memberNames(g, members)) temps.add(new Temperature(m, uni, grad, g.map.at()));
             }
             List<Settlement> sets = new ArrayList<>();
-            items = f.list("settlements", false, "a list of support settlements");
-            for (int i = 0; i < items.size(); i++) {
-                String p = path + ".settlements[" + i + "]";
-                Fields g = Fields.of(items.get(i), p, problems, List.of("node", "ux", "uy", "rz"),
-                        "a map such as {node: B, uy: -10 mm}");
-                if (g == null) continue;
+            for (Fields g : entries(f, path, "settlements", "a list of support settlements", List.of("node", "ux", "uy", "rz"),
+                    "a map such as {node: B, uy: -10 mm}")) {
                 String node = g.text("node", true, "a node name");
                 GeometryReader.nodeRef(g, "node", node, nodes);
                 double[] v = {g.quantity("ux", Dimension.LENGTH, u, false), g.quantity("uy", Dimension.LENGTH, u, false),
@@ -97,9 +86,20 @@ final class LoadsReader {
                                 + "; a settlement is a movement of a restrained direction");
                     }
                 }
-                sets.add(new Settlement(node, v[0], v[1], v[2], items.get(i).at()));
+                sets.add(new Settlement(node, v[0], v[1], v[2], g.map.at()));
             }
             out.add(new LoadCase(e.key(), type, sw, pattern, ml, nl, temps, sets, e.keyAt()));
+        }
+        return out;
+    }
+
+    /** Each map of the list under {@code key}, opened with its field path ("loads.D.node_loads[2]"); a problem for each that is not a map. */
+    private List<Fields> entries(Fields f, String path, String key, String what, List<String> allowed, String example) {
+        List<Fields> out = new ArrayList<>();
+        List<Tree> items = f.list(key, false, what);
+        for (int i = 0; i < items.size(); i++) {
+            Fields g = Fields.of(items.get(i), path + "." + key + "[" + i + "]", problems, allowed, example);
+            if (g != null) out.add(g);
         }
         return out;
     }
