@@ -307,4 +307,39 @@ class ExplanationsRulesTest {
         assertEquals("the distributed load of case D on member M2 left out", x.sentence());
         assertTrue(x.allOkAfter());
     }
+
+    @Test
+    void oneMemberLoadCountedTwice() {
+        // the left half's 10 kN/m doubled: R_A = 2 x 22.5 + 7.5 = 52.5 kN, R_B = 2 x 7.5 + 22.5 = 37.5 kN
+        Review r = ExplanationsTest.review(SIMPLE + """
+                loads:
+                  D: {type: dead, member_loads: [{members: [M1, M2], w: -10}]}
+                  L: {type: live, member_loads: [{members: [M1, M2], w: -5}]}
+                """, """
+                claims:
+                  reactions:
+                    - {node: A, combo: D, Fy: 52.5}
+                    - {node: B, combo: D, Fy: 37.5}
+                    - {node: A, combo: L, Fy: 15}
+                """);
+        Explanation x = r.explanations().get(0);
+        assertEquals("the distributed load of case D on member M1 counted twice", x.sentence());
+        assertTrue(x.allOkAfter());
+    }
+
+    @Test
+    void aSecondMomentOfAreaInTheWrongUnit() {
+        // I 10^4 times the model's (cm4 read as mm4, or the reverse): midspan deflection 8.4375 mm / 10^4
+        Review r = ExplanationsTest.review(SIMPLE + "loads: {D: {type: dead, member_loads: [{members: [M1, M2], w: -10}]}}\n", """
+                claims:
+                  reactions:
+                    - {node: A, combo: D, Fy: 30}
+                  displacements:
+                    - {node: C, combo: D, uy: -8.4375e-7}
+                  members:
+                    - {member: M1, combo: D, deflection: 8.4375e-7}
+                """);
+        Explanation x = named(r, "the model solved with I of section G 10^4 times the model's (cm4 and mm4)");
+        assertTrue(x.allOkAfter());
+    }
 }
