@@ -135,26 +135,6 @@ public final class ClaimsReader {
         return null;
     }
 
-    /** A position along the claimed member: a length in the claims' units from its start, or "NN%" of its length. */
-    private static double position(Fields g, double lengthM, UnitSystem units) {
-        Tree t = g.get("at");
-        double x;
-        if (t instanceof Tree.Scalar s && s.text().trim().endsWith("%")) {
-            try {
-                x = Double.parseDouble(s.text().trim().replace("%", "").trim()) / 100 * lengthM;
-            } catch (NumberFormatException e) {
-                g.problem(t.at(), "at", "'" + s.text() + "' is not a percentage; expected e.g. '50%'");
-                return Double.NaN;
-            }
-        } else {
-            x = g.quantity("at", Dimension.LENGTH, units, true);
-        }
-        if (Double.isFinite(lengthM) && Double.isFinite(x) && (x < -1e-9 * lengthM || x > lengthM * (1 + 1e-9))) {
-            g.problem(t.at(), "at", "position " + x + " m is outside the member (length " + lengthM + " m); expected 0 to the length");
-            return Double.NaN;
-        }
-        return Double.isFinite(lengthM) ? Math.min(Math.max(x, 0), lengthM) : x;
-    }
 
     private static final Pattern SPAN_RATIO = Pattern.compile(
             "\\s*(?:L|l|span)\\s*/\\s*(\\d+(?:[.,]\\d+)?)\\s*");
@@ -206,7 +186,8 @@ public final class ClaimsReader {
             String combo = g.text("combo", true, "a combination, a load case or envelope");
             double tol = g.has("tolerance") ? tolerance(g.get("tolerance"), g.field("tolerance"), problems) : Double.NaN;
             var claimedMember = kind == Claim.Kind.MEMBER && name != null ? model.member(name) : null;
-            double atM = g.has("at") ? position(g, claimedMember == null ? Double.NaN : model.lengthM(claimedMember), units) : Double.NaN;
+            double atM = g.has("at") ? LoadsReader.position(g, "at", claimedMember == null ? Double.NaN : model.lengthM(claimedMember), units)
+                    : Double.NaN;
             int n = 0, blank = 0;
             for (String q : quantities) {
                 if (!g.has(q)) continue;

@@ -219,7 +219,7 @@ final class LoadsReader {
     }
 
     /** A position along a member: a length from its start, or "NN%" of its length; checked to lie on it. */
-    private double position(Fields g, String key, double lengthM, UnitSystem u) {
+    static double position(Fields g, String key, double lengthM, UnitSystem u) {
         Tree t = g.get(key);
         double x;
         if (t instanceof Tree.Scalar s && s.kind() == Tree.Scalar.Kind.STRING && s.text().trim().endsWith("%")) {

@@ -162,10 +162,8 @@ final class Diagnosis {
         // combinations, formed here from the solved load cases even when the model does not list them
         LoadSet own = a.loadSets().stream().filter(x -> x.name().equals(c.combo())).findFirst().orElse(null);
         if (own != null && own.origin().startsWith("ASCE/SEI 7-16 section 2.3.1") && !a.model().standardCombinations().contains("asce7-asd")) {
-            Model asd = new Model(m.file(), m.job(), m.units(), m.materials(), m.sections(), m.nodes(), m.supports(), m.members(),
-                    m.loadCases(), List.of(), List.of("asce7-asd"), m.redundants(), List.of());
             EngineResult er = a.engines().get(engine);
-            for (LoadSet s : StandardCombinations.expand(asd)) {
+            for (LoadSet s : StandardCombinations.expand(m, "asce7-asd")) {
                 if (s.factors().keySet().stream().anyMatch(k -> m.loadCase(k).pattern())) continue;
                 Map<Solution, Double> parts = new LinkedHashMap<>();
                 for (var f : s.factors().entrySet()) parts.put(er.cases().get(f.getKey()), f.getValue());

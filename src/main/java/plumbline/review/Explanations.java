@@ -433,10 +433,8 @@ final class Explanations {
         for (String[] pair : OTHER_SET) {
             String from = pair[0], to = pair[1];
             if (!m.standardCombinations().contains(from)) continue;
-            Model other = new Model(m.file(), m.job(), m.units(), m.materials(), m.sections(), m.nodes(), m.supports(), m.members(),
-                    m.loadCases(), List.of(), List.of(to), m.redundants(), List.of());
             Map<String, LoadSet> byName = new HashMap<>();
-            for (LoadSet s : StandardCombinations.expand(other)) byName.put(s.name(), s);
+            for (LoadSet s : StandardCombinations.expand(m, to)) byName.put(s.name(), s);
             Map<String, LoadSetResult> made = new HashMap<>();
             trials.add(new Trial("the claims of the " + from + " combinations are those of the " + to + " combinations of the same "
                     + "number (" + (from.startsWith("asce7") ? "allowable-stress against strength design, or the reverse"

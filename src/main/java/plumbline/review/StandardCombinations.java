@@ -40,6 +40,12 @@ public final class StandardCombinations {
     private record Action(String symbol, List<String> cases) {
     }
 
+    /** The combinations of one standard set formed over the model's load cases, whatever sets the model names. */
+    static List<LoadSet> expand(Model m, String set) {
+        return expand(new Model(m.file(), m.job(), m.units(), m.materials(), m.sections(), m.nodes(), m.supports(), m.members(),
+                m.loadCases(), List.of(), List.of(set), m.redundants(), List.of()));
+    }
+
     public static List<LoadSet> expand(Model model) {
         List<LoadSet> out = new ArrayList<>();
         for (String set : model.standardCombinations()) {
