@@ -111,7 +111,7 @@ final class Run {
         Map<String, byte[]> pictures = null;
         if (figures != null) {
             try {
-                pictures = Figures.render(r, DrawnLoadSets.choose(r));
+                pictures = Figures.render(r, DrawnLoadSets.choose(r).names());
             } catch (IOException e) {
                 err.println("plumbline: cannot draw the figures: " + e.getMessage());
                 return Main.INTERNAL;

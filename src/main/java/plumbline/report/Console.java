@@ -81,11 +81,12 @@ public final class Console {
             if (!e.checkedFx() && !e.checkedFy() && !e.checkedMoment()) line += e.note();
             else {
                 line += (e.balanced() ? "balanced" : "OUT OF BALANCE");
-                if (e.checkedFx()) line += String.format(Locale.ROOT, "; sum Fx %s", fmt(u.fromInternal(e.sumFxN(), Dimension.FORCE)));
-                if (e.checkedFy()) line += String.format(Locale.ROOT, ", sum Fy %s", fmt(u.fromInternal(e.sumFyN(), Dimension.FORCE)));
-                if (e.checkedMoment()) line += String.format(Locale.ROOT, ", sum M about %s %s", e.referenceNode(),
-                        fmt(u.fromInternal(e.sumMomentNm(), Dimension.MOMENT)));
-                line += " " + u.force().symbol();
+                // each sum with its own unit: forces in the force unit, the moment in force times length
+                String f = " " + u.force().symbol(), mo = " " + u.symbol(Dimension.MOMENT);
+                if (e.checkedFx()) line += "; sum Fx " + fmt(u.fromInternal(e.sumFxN(), Dimension.FORCE)) + f;
+                if (e.checkedFy()) line += "; sum Fy " + fmt(u.fromInternal(e.sumFyN(), Dimension.FORCE)) + f;
+                if (e.checkedMoment()) line += "; sum M about " + e.referenceNode() + " "
+                        + fmt(u.fromInternal(e.sumMomentNm(), Dimension.MOMENT)) + mo;
                 if (!e.note().isEmpty()) line += "; " + e.note();
             }
             sb.append(wrap(line, "    "));
@@ -215,11 +216,14 @@ public final class Console {
         if (!Double.isFinite(v)) return "n/a";
         double a = Math.abs(v);
         if (a == 0) return "0";
-        if (a >= 1e-3 && a < 1e7) {
-            int digits = Math.max(0, 3 - (int) Math.floor(Math.log10(a)));
-            return String.format(Locale.ROOT, "%." + digits + "f", v);
-        }
+        if (a >= 1e-6 && a < 1e9) return fixed(v, Math.max(0, 3 - (int) Math.floor(Math.log10(a))));
         return String.format(Locale.ROOT, "%.3e", v);
+    }
+
+    /** A value with a fixed number of decimals, never "-0.00": a value that rounds to zero prints unsigned. */
+    static String fixed(double v, int decimals) {
+        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
+        return s.startsWith("-") && s.chars().noneMatch(ch -> ch >= '1' && ch <= '9') ? s.substring(1) : s;
     }
 
 

@@ -15,13 +15,21 @@ import plumbline.model.LoadCase;
 import plumbline.model.Model;
 import plumbline.review.Analysis;
 import plumbline.review.Review;
+import plumbline.review.LoadSetResult;
 import plumbline.solve.Solution;
 
-/** The report's pictures as PNG images (the same {@link Drawings} code as the PDF), by file name. */
+/**
+ * The report's pictures as PNG images (the same {@link Sketch} and {@link Diagrams} code as
+ * the PDF), by file name. Each image carries a title line (the job, the load set, what is
+ * drawn and its units) above the drawing and the caution below it, so a picture taken out
+ * of the report still says what it is and what it is not.
+ */
 public final class Figures {
 
     /** Pixels per point of the drawing: 2 gives 144 dpi images of the report's 499 pt wide pictures. */
     static final int PIXELS_PER_POINT = 2;
+    /** Points above the drawing for the title and below it for the caution. */
+    static final int TITLE_PT = 16, CAUTION_PT = 14;
 
     private Figures() {
     }
@@ -30,19 +38,28 @@ public final class Figures {
         Map<String, byte[]> out = new LinkedHashMap<>();
         Analysis a = review.analysis();
         Model m = a.model();
+        String job = PdfReport.jobTitle(m);
         LoadCase first = m.loadCases().isEmpty() ? null : m.loadCases().get(0);
-        out.put("model.png", png(499, 230, g -> Drawings.model(g, m, first, 499, 230)));
+        String units = "units " + m.units().force().symbol() + ", " + m.units().length().symbol();
+        out.put("model.png", png(499, 230, job + " - the model" + (first == null ? "" : ", loads of load case " + first.name())
+                + " (" + units + ")", g -> Sketch.model(g, m, first, 499, 230)));
         int k = 1;
         for (var mech : a.determinacy().shapes()) {
-            out.put("mechanism-" + k++ + ".png", png(499, 160, g -> Drawings.mechanism(g, m, mech.motion(), 499, 160)));
+            out.put("mechanism-" + k + ".png", png(499, 160, job + " - mechanism " + k + ": " + mech.description(),
+                    g -> Sketch.mechanism(g, m, mech.motion(), 499, 160)));
+            k++;
         }
         if (a.stable()) {
             for (String name : sets) {
-                Solution s = a.solutions().get(a.primaryEngine()).get(name).representative();
-                for (Drawings.Kind kind : Drawings.Kind.values()) {
-                    if (Drawings.blank(m, s, kind)) continue;
+                LoadSetResult r = a.solutions().get(a.primaryEngine()).get(name);
+                Solution s = r.representative();
+                for (Diagrams.Kind kind : Diagrams.Kind.values()) {
+                    if (Diagrams.blank(m, s, kind)) continue;
+                    String unit = Shown.unit(m.units(), kind.dimension);
+                    String title = job + " - load set " + name + (r.patterned() ? " (envelope)" : "") + " - "
+                            + kind.title.replaceAll(" \\(.*", "") + " (" + unit + ")";
                     out.put(safe(name) + "-" + kind.name().toLowerCase(Locale.ROOT) + ".png",
-                            png(499, 150, g -> Drawings.diagram(g, m, s, kind, 499, 150)));
+                            png(499, 150, title, g -> Diagrams.diagram(g, m, r, kind, 499, 150, true)));
                 }
             }
         }
@@ -54,13 +71,22 @@ public final class Figures {
         return name.replaceAll("[^A-Za-z0-9._-]", "_");
     }
 
-    static byte[] png(int w, int h, Consumer<Graphics2D> draw) throws IOException {
-        BufferedImage img = new BufferedImage(w * PIXELS_PER_POINT, h * PIXELS_PER_POINT, BufferedImage.TYPE_INT_RGB);
+    /** A drawing w by h points under a title line and over the caution line, as a PNG. */
+    static byte[] png(int w, int h, String title, Consumer<Graphics2D> draw) throws IOException {
+        int total = h + TITLE_PT + CAUTION_PT;
+        BufferedImage img = new BufferedImage(w * PIXELS_PER_POINT, total * PIXELS_PER_POINT, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
             g.setColor(Color.WHITE);
             g.fillRect(0, 0, img.getWidth(), img.getHeight());
             g.scale(PIXELS_PER_POINT, PIXELS_PER_POINT);
+            Ink.prepare(g);
+            g.setFont(Typeface.awt(8f).deriveFont(java.awt.Font.BOLD));
+            Typeface.draw(g, PdfKit.Footer.fit(title, w - 8), 4, 11);
+            g.setFont(Typeface.awt(6.5f));
+            Typeface.draw(g, PdfKit.FOOTER_CAUTION, 4, total - 4);
+            g.translate(0, TITLE_PT);
+            g.clipRect(0, 0, w, h);
             draw.accept(g);
         } finally {
             g.dispose();

@@ -1,7 +1,6 @@
 package plumbline.report;
 
 import java.awt.Color;
-import java.awt.Graphics2D;
 import java.io.ByteArrayOutputStream;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -10,23 +9,13 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import java.util.function.Consumer;
 import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
 import com.lowagie.text.DocumentException;
-import com.lowagie.text.Element;
-import com.lowagie.text.Font;
-import com.lowagie.text.FontFactory;
-import com.lowagie.text.Image;
 import com.lowagie.text.PageSize;
 import com.lowagie.text.Paragraph;
-import com.lowagie.text.Phrase;
-import com.lowagie.text.Rectangle;
-import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
-import com.lowagie.text.pdf.PdfPageEventHelper;
-import com.lowagie.text.pdf.PdfTemplate;
 import com.lowagie.text.pdf.PdfWriter;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
@@ -43,22 +32,29 @@ import plumbline.review.LoadSetResult;
 import plumbline.review.Review;
 import plumbline.solve.EngineResult;
 import plumbline.solve.Equilibrium;
+import plumbline.solve.MemberSolution;
 import plumbline.solve.Solution;
 import plumbline.statics.ClaimedEquilibrium;
 import plumbline.statics.Determinacy;
 import plumbline.units.Dimension;
 import plumbline.units.UnitSystem;
+import static plumbline.report.PdfKit.Style.BODY;
+import static plumbline.report.PdfKit.Style.BOLD;
+import static plumbline.report.PdfKit.Style.SMALL;
+import static plumbline.report.PdfKit.Style.SMALL_BOLD;
 
 /**
  * The discrepancy report a checker attaches to a calculation package: title block,
- * summary, statics, equilibrium of the claims, the comparison, queries for the originator,
- * drawings, the force-method working, warnings, cautions and a sign-off block. The only
- * class that uses OpenPDF. Flagged rows are shaded, set in bold and marked with "!!" or
- * "?" so a grey-scale print still shows them.
+ * summary, the model as checked (sketches with values and dimensions, and the input echo),
+ * statics, equilibrium of the claims, the comparison, queries for the originator,
+ * diagrams, the force-method working, warnings, cautions and a sign-off block. The only
+ * classes that use OpenPDF are this one, {@link PdfKit} (page furniture) and
+ * {@link ModelEcho} (the input tables). Flagged rows are shaded, set in bold and marked
+ * with "!!" or "?" so a grey-scale print still shows them; every page's footer carries
+ * the caution.
  *
  * Over 400 lines because it writes every section of the report in order, one method a
- * section, sharing the page furniture (footer, caution, table styles); the drawings are in
- * {@link Drawings}.
+ * section; the furniture, the input echo and the drawings are in their own classes.
  */
 public final class PdfReport {
 
@@ -66,25 +62,15 @@ public final class PdfReport {
             + "against the numbers claimed for it. It does not replace the engineer of record, licensed review or the local "
             + "codes, and agreement with the claims does not show that the model represents the structure.";
 
-    private static final Color INK = new Color(0x21, 0x21, 0x21);
-    private static final Color RULE = new Color(0x9E, 0x9E, 0x9E);
-    private static final Color SHADE_MISMATCH = new Color(0xD6, 0xD6, 0xD6);
-    private static final Color SHADE_MARGINAL = new Color(0xEC, 0xEC, 0xEC);
-    private static final Color HEAD = new Color(0x37, 0x47, 0x4F);
-
-    private final Font title = FontFactory.getFont(FontFactory.HELVETICA_BOLD, 15, INK);
-    private final Font h1 = FontFactory.getFont(FontFactory.HELVETICA_BOLD, 11.5f, HEAD);
-    private final Font body = FontFactory.getFont(FontFactory.HELVETICA, 9, INK);
-    private final Font small = FontFactory.getFont(FontFactory.HELVETICA, 7.5f, INK);
-    private final Font smallBold = FontFactory.getFont(FontFactory.HELVETICA_BOLD, 7.5f, INK);
-    private final Font bold = FontFactory.getFont(FontFactory.HELVETICA_BOLD, 9, INK);
-    private final Font headCell = FontFactory.getFont(FontFactory.HELVETICA_BOLD, 7.5f, Color.WHITE);
+    /** Load cases drawn with their loads in the model section, beyond which the load table alone gives them. */
+    static final int CASES_DRAWN = 6;
 
     private final Review review;
     private final ResultsTree.Inputs inputs;
     private final Double agreement;
     private final List<String> notes;
     private final LocalDate date;
+    private PdfKit kit;
 
     private PdfReport(Review review, ResultsTree.Inputs inputs, Double agreement, List<String> notes, LocalDate date) {
         this.review = review;
@@ -102,134 +88,41 @@ public final class PdfReport {
         }
     }
 
-    /** "Page x of y" and the job title on every page; y is filled in when the document closes. */
-    private static final class Footer extends PdfPageEventHelper {
-        private final String text;
-        private PdfTemplate total;
-        private final com.lowagie.text.pdf.BaseFont font;
-
-        Footer(String text) {
-            this.text = text;
-            try {
-                font = com.lowagie.text.pdf.BaseFont.createFont(com.lowagie.text.pdf.BaseFont.HELVETICA,
-                        com.lowagie.text.pdf.BaseFont.WINANSI, false);
-            } catch (Exception e) {
-                throw new IllegalStateException(e);
-            }
-        }
-
-        @Override
-        public void onOpenDocument(PdfWriter writer, Document document) {
-            total = writer.getDirectContent().createTemplate(40, 12);
-        }
-
-        @Override
-        public void onEndPage(PdfWriter writer, Document document) {
-            PdfContentByte cb = writer.getDirectContent();
-            String left = text;
-            String page = "page " + writer.getPageNumber() + " of ";
-            float y = document.bottom() - 22;
-            cb.setColorStroke(RULE);
-            cb.setLineWidth(0.4f);
-            cb.moveTo(document.left(), y + 10);
-            cb.lineTo(document.right(), y + 10);
-            cb.stroke();
-            cb.beginText();
-            cb.setFontAndSize(font, 7.5f);
-            cb.setColorFill(INK);
-            cb.setTextMatrix(document.left(), y);
-            cb.showText(left);
-            float w = font.getWidthPoint(page, 7.5f);
-            cb.setTextMatrix(document.right() - w - 18, y);
-            cb.showText(page);
-            cb.endText();
-            cb.addTemplate(total, document.right() - 18, y);
-        }
-
-        @Override
-        public void onCloseDocument(PdfWriter writer, Document document) {
-            total.beginText();
-            total.setFontAndSize(font, 7.5f);
-            total.setColorFill(INK);
-            total.setTextMatrix(0, 0);
-            total.showText(String.valueOf(writer.getPageNumber() - 1)); // the writer has moved past the last page
-            total.endText();
-        }
+    static String jobTitle(Model m) {
+        return m.job().title().isEmpty() ? m.file() : m.job().title();
     }
 
     private byte[] build() throws DocumentException {
         Model m = review.analysis().model();
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        Document doc = new Document(PageSize.A4, 48, 48, 48, 60);
+        Document doc = new Document(PageSize.A4, 48, 48, 48, 72);
         PdfWriter writer = PdfWriter.getInstance(doc, out);
-        String jobTitle = m.job().title().isEmpty() ? m.file() : m.job().title();
-        writer.setPageEvent(new Footer("Plumbline " + ResultsTree.TOOL_VERSION + " discrepancy report - " + ascii(jobTitle)));
-        doc.addTitle("Plumbline discrepancy report: " + ascii(jobTitle));
+        writer.setPageEvent(new PdfKit.Footer("Plumbline " + ResultsTree.TOOL_VERSION + " discrepancy report - " + jobTitle(m)));
+        doc.addTitle("Plumbline discrepancy report: " + jobTitle(m));
         doc.addCreator("Plumbline " + ResultsTree.TOOL_VERSION);
         doc.open();
-        titleBlock(doc, m, jobTitle);
-        summary(doc);
-        modelSketch(doc, writer, m);
-        statics(doc, writer, m);
-        equilibrium(doc, m);
-        comparison(doc, m);
-        queries(doc, m);
-        diagrams(doc, writer, m);
-        working(doc);
-        warnings(doc);
-        cautions(doc);
-        signOff(doc, m);
+        kit = new PdfKit(doc, writer);
+        titleBlock(m);
+        summary();
+        model(m);
+        statics(m);
+        equilibrium(m);
+        comparison(m);
+        queries(m);
+        diagrams(m);
+        working();
+        warnings();
+        cautions();
+        signOff(m);
         doc.close();
         return out.toByteArray();
     }
 
-    /** The standard fonts hold Latin-1 only; anything else is shown as '?'. */
-    static String ascii(String s) {
-        StringBuilder sb = new StringBuilder();
-        for (char c : s.toCharArray()) sb.append(c < 256 ? c : '?');
-        return sb.toString();
-    }
-
-    private void heading(Document doc, String text) throws DocumentException {
-        Paragraph p = new Paragraph(text, h1);
-        p.setSpacingBefore(12);
-        p.setSpacingAfter(4);
-        doc.add(p);
-    }
-
-    private void para(Document doc, String text, Font f) throws DocumentException {
-        Paragraph p = new Paragraph(ascii(text), f);
-        p.setSpacingAfter(3);
-        doc.add(p);
-    }
-
-    private PdfPCell cell(String text, Font f, Color shade) {
-        PdfPCell c = new PdfPCell(new Phrase(ascii(text), f));
-        c.setBorderColor(RULE);
-        c.setBorderWidth(0.4f);
-        c.setPadding(2.5f);
-        if (shade != null) c.setBackgroundColor(shade);
-        return c;
-    }
-
-    private PdfPTable table(float[] widths, String... heads) {
-        PdfPTable t = new PdfPTable(widths);
-        t.setWidthPercentage(100);
-        t.setHeaderRows(1);
-        t.setSpacingBefore(3);
-        t.setSpacingAfter(6);
-        for (String h : heads) {
-            PdfPCell c = cell(h, headCell, HEAD);
-            t.addCell(c);
-        }
-        return t;
-    }
-
-    private void titleBlock(Document doc, Model m, String jobTitle) throws DocumentException {
-        Paragraph p = new Paragraph("Independent check - discrepancy report", title);
+    private void titleBlock(Model m) throws DocumentException {
+        Paragraph p = new Paragraph(PdfKit.phrase("Independent check - discrepancy report", PdfKit.Style.TITLE));
         p.setSpacingAfter(2);
-        doc.add(p);
-        para(doc, jobTitle, bold);
+        kit.doc.add(p);
+        kit.para(jobTitle(m), BOLD);
         PdfPTable t = new PdfPTable(new float[]{1.3f, 4f});
         t.setWidthPercentage(100);
         t.setSpacingBefore(6);
@@ -242,18 +135,19 @@ public final class PdfReport {
                         : String.join(", ", standards(m))},
                 {"Originator", m.job().originator()}, {"Checker", m.job().checker()},
                 {"Date", date.toString()}, {"Tool", "Plumbline " + ResultsTree.TOOL_VERSION + " (stiffness and force methods)"},
-                {"Units", m.units().force().symbol() + ", " + m.units().length().symbol() + " and their products"},
+                {"Units", m.units().force().symbol() + ", " + m.units().length().symbol() + " and their products; displacements in "
+                        + Shown.unit(m.units(), Dimension.LENGTH)},
         };
         for (String[] r : rows) {
-            t.addCell(cell(r[0], smallBold, null));
-            t.addCell(cell(r[1].isEmpty() ? "-" : r[1], small, null));
+            t.addCell(PdfKit.cell(r[0], SMALL_BOLD, null));
+            t.addCell(PdfKit.cell(r[1].isEmpty() ? "-" : r[1], SMALL, null));
         }
         for (int i = 0; i < inputs.files().size(); i++) {
-            t.addCell(cell(i == 0 ? "Input files (SHA-256)" : "", smallBold, null));
-            t.addCell(cell(inputs.files().get(i) + "  " + inputs.sha256().get(i), small, null));
+            t.addCell(PdfKit.cell(i == 0 ? "Input files (SHA-256)" : "", SMALL_BOLD, null));
+            t.addCell(PdfKit.cell(inputs.files().get(i) + "  " + inputs.sha256().get(i), SMALL, null));
         }
-        doc.add(t);
-        para(doc, "Caution: " + CAUTION, small);
+        kit.doc.add(t);
+        kit.para("Caution: " + CAUTION, SMALL);
     }
 
     static List<String> standards(Model m) {
@@ -269,43 +163,49 @@ public final class PdfReport {
         return out;
     }
 
-    private void summary(Document doc) throws DocumentException {
-        heading(doc, "1  Summary");
+    private List<ClaimResult> flagged() {
+        return review.claims().stream().filter(c -> c.status() != ClaimResult.Status.OK).toList();
+    }
+
+    private void summary() throws DocumentException {
+        kit.heading("Summary");
         long ok = count(ClaimResult.Status.OK), mg = count(ClaimResult.Status.MARGINAL), mm = count(ClaimResult.Status.MISMATCH);
         Paragraph v = new Paragraph();
-        v.add(new Chunk("Verdict: " + review.verdict().word.toUpperCase(Locale.ROOT), FontFactory.getFont(FontFactory.HELVETICA_BOLD, 13, INK)));
-        v.add(new Chunk(String.format(Locale.ROOT, "      %d claims: %d ok, %d marginal, %d mismatch", ok + mg + mm, ok, mg, mm), body));
+        v.add(PdfKit.phrase("Verdict: " + review.verdict().word.toUpperCase(Locale.ROOT), PdfKit.Style.VERDICT));
+        v.add(new Chunk("      "));
+        v.add(PdfKit.phrase(String.format(Locale.ROOT, "%d claims: %d ok, %d marginal, %d mismatch", ok + mg + mm, ok, mg, mm), BODY));
         v.setSpacingAfter(2);
-        doc.add(v);
-        para(doc, "The verdict means: " + review.verdict().meaning(), review.verdict().flagged ? bold : body);
+        kit.doc.add(v);
+        kit.para("The verdict means: " + review.verdict().meaning(), review.verdict().flagged ? BOLD : BODY);
         Determinacy.Result d = review.analysis().determinacy();
-        para(doc, "Statics: " + d.classification().word + (d.classification() == Determinacy.Classification.INDETERMINATE
+        kit.para("Statics: " + d.classification().word + (d.classification() == Determinacy.Classification.INDETERMINATE
                 ? " to degree " + d.degree() : "") + (d.mechanisms() > 0 ? ", " + d.mechanisms() + " mechanism(s)" : "")
-                + ". " + solvedLine(), body);
+                + ". " + solvedLine(), BODY);
         long unbalanced = review.equilibrium().stream().filter(e -> !e.balanced()).count();
-        if (unbalanced > 0) para(doc, "Claimed reactions out of balance in " + unbalanced + " combination(s): see section 3.", bold);
-        List<ClaimResult> worst = new ArrayList<>(review.claims());
-        worst.removeIf(c -> c.status() == ClaimResult.Status.OK);
+        if (unbalanced > 0) kit.para("Claimed reactions out of balance in " + unbalanced + " combination(s): see section 3.", BOLD);
+        List<ClaimResult> worst = new ArrayList<>(flagged());
         worst.sort((a, b) -> Double.compare(b.relativeDifference(), a.relativeDifference()));
         if (worst.isEmpty()) {
-            para(doc, "No claim differs from the computed value by more than its tolerance.", body);
+            kit.para(review.claims().isEmpty() ? "No claims were given, so nothing was compared."
+                    : "No claim differs from the computed value by more than its tolerance.", BODY);
             return;
         }
-        para(doc, "Largest discrepancies:", bold);
-        PdfPTable t = table(new float[]{0.65f, 2.2f, 1.1f, 1.1f, 0.8f, 4.15f}, "Query", "Claim", "Claimed", "Computed", "Diff.", "Likely cause");
+        kit.caption("Largest discrepancies:");
+        PdfPTable t = PdfKit.table(new float[]{0.65f, 2.2f, 1.1f, 1.1f, 0.8f, 4.15f}, "Query", "Claim", "Claimed", "Computed", "Diff.", "Likely cause");
         UnitSystem u = review.analysis().model().units();
+        List<ClaimResult> all = flagged();
         for (int i = 0; i < Math.min(6, worst.size()); i++) {
             ClaimResult c = worst.get(i);
             Color shade = shade(c);
-            Font f = c.status() == ClaimResult.Status.OK ? small : smallBold;
-            t.addCell(cell("Q" + (review.claims().stream().filter(x -> x.status() != ClaimResult.Status.OK).toList().indexOf(c) + 1), f, shade));
-            t.addCell(cell(label(c.claim()), f, shade));
-            t.addCell(cell(value(u, c.claim().valueInternal(), c.claim().dimension()), f, shade));
-            t.addCell(cell(value(u, c.computed(), c.claim().dimension()), f, shade));
-            t.addCell(cell(Console.pct(c.relativeDifference()), f, shade));
-            t.addCell(cell(c.diagnosis() == null ? "no single slip explains it: query the originator" : c.diagnosis(), small, shade));
+            String[] pair = Shown.pair(review.analysis().model(), c);
+            t.addCell(PdfKit.cell("Q" + (all.indexOf(c) + 1), SMALL_BOLD, shade));
+            t.addCell(PdfKit.cell(label(c.claim()), SMALL_BOLD, shade));
+            t.addCell(PdfKit.cell(pair[0], SMALL_BOLD, shade));
+            t.addCell(PdfKit.cell(pair[1], SMALL_BOLD, shade));
+            t.addCell(PdfKit.cell(Shown.difference(u, c), SMALL_BOLD, shade));
+            t.addCell(PdfKit.cell(c.diagnosis() == null ? "no single slip explains it: query the originator" : c.diagnosis(), SMALL, shade));
         }
-        doc.add(t);
+        kit.doc.add(t);
     }
 
     private String solvedLine() {
@@ -326,162 +226,211 @@ public final class PdfReport {
     }
 
     private static Color shade(ClaimResult c) {
-        return c.status() == ClaimResult.Status.MISMATCH ? SHADE_MISMATCH : c.status() == ClaimResult.Status.MARGINAL ? SHADE_MARGINAL : null;
+        return c.status() == ClaimResult.Status.MISMATCH ? PdfKit.SHADE_MISMATCH
+                : c.status() == ClaimResult.Status.MARGINAL ? PdfKit.SHADE_MARGINAL : null;
     }
 
     static String label(Claim c) {
         return c.item().word + " " + c.name() + " " + c.quantity() + " (" + c.combo() + ")";
     }
 
-    static String value(UnitSystem u, double si, Dimension d) {
-        return Console.fmt(u.fromInternal(si, d)) + " " + u.symbol(d);
-    }
-
-    private Image picture(PdfWriter writer, float w, float h, Consumer<Graphics2D> draw) throws DocumentException {
-        PdfTemplate tpl = writer.getDirectContent().createTemplate(w, h);
-        Graphics2D g = tpl.createGraphicsShapes(w, h);
-        try {
-            g.setColor(Color.WHITE);
-            g.fillRect(0, 0, (int) w, (int) h);
-            draw.accept(g);
-        } finally {
-            g.dispose();
+    /** Section 2: the sketch with the first case's loads, the other cases' loads, then the input echo. */
+    private void model(Model m) throws DocumentException {
+        kit.heading("The model as checked", 330); // the heading, a line and the sketch with its legend
+        kit.para(String.format(Locale.ROOT, "%d nodes, %d members, %d supports, %d load cases, %d load sets checked.",
+                m.nodes().size(), m.members().size(), m.supports().size(), m.loadCases().size(),
+                review.analysis().loadSets().size()), BODY);
+        boolean loadsDrawn = m.members().size() <= Sketch.LOAD_LIMIT && !m.loadCases().isEmpty();
+        LoadCase first = loadsDrawn ? m.loadCases().get(0) : null;
+        String legend = "Symbols: wedge = pinned support, wedge on rollers = roller, bar with hatching = fixed support, zigzag "
+                + "= spring, open circle = hinge (or truss member end), arrow head on a member = its direction (start to end, "
+                + "local x), arrows off the members = loads with their values (" + m.units().force().symbol() + ", "
+                + m.units().symbol(Dimension.FORCE_PER_LENGTH) + ", " + m.units().symbol(Dimension.MOMENT) + "); dimensions in "
+                + m.units().length().symbol() + "."
+                + (m.members().size() > Sketch.LABEL_LIMIT ? " Names, values and dimensions are left out of the drawings of a model "
+                + "this size; the tables carry them." : "")
+                + (m.members().size() > Sketch.LOAD_LIMIT ? " Loads are not drawn at this size; the load table gives them." : "");
+        kit.figure(first == null ? "The model" : "The model with the loads of load case " + first.name() + " (" + first.type()
+                + (first.pattern() ? ", pattern loaded" : "") + ")", kit.picture(499, 230, g -> Sketch.model(g, m, first, 499, 230)), legend);
+        if (loadsDrawn) {
+            List<LoadCase> more = m.loadCases().subList(1, Math.min(CASES_DRAWN, m.loadCases().size()));
+            for (LoadCase c : more) {
+                kit.figure("Loads of load case " + c.name() + " (" + c.type() + (c.pattern() ? ", pattern loaded" : "") + ")",
+                        kit.picture(499, 180, g -> Sketch.model(g, m, c, 499, 180)), null);
+            }
+            if (m.loadCases().size() > CASES_DRAWN) kit.para("The loads of the other " + (m.loadCases().size() - CASES_DRAWN)
+                    + " load cases are given in the load table below.", SMALL);
         }
-        Image img = Image.getInstance(tpl);
-        img.setAlignment(Element.ALIGN_CENTER);
-        img.setBorder(Rectangle.BOX);
-        img.setBorderWidth(0.4f);
-        img.setBorderColor(RULE);
-        return img;
+        new ModelEcho(kit, m).write(review.analysis().loadSets());
     }
 
-    private void modelSketch(Document doc, PdfWriter writer, Model m) throws DocumentException {
-        heading(doc, "2  The model as checked");
-        para(doc, String.format(Locale.ROOT, "%d nodes, %d members, %d supports, %d load cases, %d load sets checked. "
-                        + "Loads drawn: %s.", m.nodes().size(), m.members().size(), m.supports().size(), m.loadCases().size(),
-                review.analysis().loadSets().size(), m.loadCases().isEmpty() ? "none"
-                        : m.members().size() > Drawings.LOAD_LIMIT ? "none at this size" : "load case " + m.loadCases().get(0).name()), body);
-        LoadCase first = m.loadCases().isEmpty() ? null : m.loadCases().get(0);
-        doc.add(picture(writer, 499, 230, g -> Drawings.model(g, m, first, 499, 230)));
-        if (m.members().size() > Drawings.LABEL_LIMIT) para(doc, "Names and peak values are left out of the drawings of a model "
-                + "this size; the tables and the JSON carry them.", small);
-        para(doc, "Symbols: wedge = pinned support, wedge on rollers = roller, hatched bar = fixed support, zigzag = spring, "
-                + "open circle = hinge (or truss member end), amber arrows = loads.", small);
-        int shown = m.members().size() > Drawings.LOAD_LIMIT ? 0 : Math.min(3, m.loadCases().size());
-        for (LoadCase c : m.loadCases().subList(Math.min(1, shown), Math.max(Math.min(1, shown), shown))) {
-            para(doc, "Loads of load case " + c.name() + " (" + c.type() + (c.pattern() ? ", pattern loaded" : "") + "):", small);
-            doc.add(picture(writer, 499, 170, g -> Drawings.model(g, m, c, 499, 170)));
-        }
-    }
-
-    private void statics(Document doc, PdfWriter writer, Model m) throws DocumentException {
-        heading(doc, "3  Determinacy, stability and equilibrium");
+    private void statics(Model m) throws DocumentException {
+        kit.heading("Determinacy, stability and equilibrium");
         Determinacy.Result d = review.analysis().determinacy();
-        para(doc, String.format(Locale.ROOT, "Classification by the rank of the equilibrium matrix: %s. Equations %d, unknown "
+        kit.para(String.format(Locale.ROOT, "Classification by the rank of the equilibrium matrix: %s. Equations %d, unknown "
                         + "forces %d, rank %d; degree of static indeterminacy %d; mechanisms %d. The counting formula "
                         + "(unknowns less equations) gives %d.", d.classification().word, d.equations(), d.unknowns(), d.rank(),
-                d.degree(), d.mechanisms(), d.countingDegree()), body);
-        if (!d.remark().isEmpty()) para(doc, d.remark(), bold);
+                d.degree(), d.mechanisms(), d.countingDegree()), BODY);
+        if (!d.remark().isEmpty()) kit.para(d.remark(), BOLD);
         EngineResult force = review.analysis().engines().get("force");
-        if (force != null && force.stable() && !force.notes().isEmpty()) para(doc, "Force method " + force.notes().get(0) + ".", body);
+        if (force != null && force.stable() && !force.notes().isEmpty()) kit.para("Force method " + force.notes().get(0) + ".", BODY);
         int k = 1;
         for (Determinacy.Mechanism mech : d.shapes()) {
-            para(doc, "Mechanism " + k++ + ": " + mech.description() + ".", bold);
-            if (k <= 4) doc.add(picture(writer, 499, 160, g -> Drawings.mechanism(g, m, mech.motion(), 499, 160)));
+            String caption = "Mechanism " + k + ": " + mech.description() + ".";
+            if (k++ <= 3) kit.figure(caption, kit.picture(499, 160, g -> Sketch.mechanism(g, m, mech.motion(), 499, 160)), null);
+            else kit.para(caption, BOLD);
         }
     }
 
-    private void equilibrium(Document doc, Model m) throws DocumentException {
+    private void equilibrium(Model m) throws DocumentException {
         UnitSystem u = m.units();
-        para(doc, "Equilibrium of the claimed reactions (sums of the claimed reactions and the applied loads; moments about "
+        kit.caption("Equilibrium of the claimed reactions (sums of the claimed reactions and the applied loads; moments about "
                 + "the first support; flagged beyond " + Console.pct(ClaimedEquilibrium.DEFAULT_TOLERANCE)
-                + " of the applied load, common practice):", bold);
+                + " of the applied load, common practice):");
         if (review.equilibrium().isEmpty()) {
-            para(doc, "No reactions are claimed.", body);
+            kit.para("No reactions are claimed.", BODY);
             return;
         }
-        PdfPTable t = table(new float[]{1.3f, 1.1f, 1.1f, 1.3f, 1f, 3.4f}, "Load set", "Sum Fx", "Sum Fy", "Sum M", "Status", "Note");
+        PdfPTable t = PdfKit.table(new float[]{1.3f, 1.1f, 1.1f, 1.3f, 1f, 3.4f}, "Load set", "Sum Fx", "Sum Fy", "Sum M", "Status", "Note");
         for (ClaimedEquilibrium e : review.equilibrium()) {
-            Color shade = e.balanced() ? null : SHADE_MISMATCH;
-            Font f = e.balanced() ? small : smallBold;
-            t.addCell(cell(e.combo(), f, shade));
-            t.addCell(cell(e.checkedFx() ? value(u, e.sumFxN(), Dimension.FORCE) : "-", f, shade));
-            t.addCell(cell(e.checkedFy() ? value(u, e.sumFyN(), Dimension.FORCE) : "-", f, shade));
-            t.addCell(cell(e.checkedMoment() ? value(u, e.sumMomentNm(), Dimension.MOMENT) + " about " + e.referenceNode() : "-", f, shade));
-            t.addCell(cell(!e.checkedFx() && !e.checkedFy() && !e.checkedMoment() ? "not checked" : e.balanced() ? "balanced" : "!! OUT OF BALANCE", f, shade));
-            t.addCell(cell(e.note(), small, shade));
+            Color shade = e.balanced() ? null : PdfKit.SHADE_MISMATCH;
+            PdfKit.Style f = e.balanced() ? SMALL : SMALL_BOLD;
+            t.addCell(PdfKit.cell(e.combo(), f, shade));
+            t.addCell(PdfKit.cell(e.checkedFx() ? Shown.sum(u, e.sumFxN(), e.relFx(), Dimension.FORCE) : "-", f, shade));
+            t.addCell(PdfKit.cell(e.checkedFy() ? Shown.sum(u, e.sumFyN(), e.relFy(), Dimension.FORCE) : "-", f, shade));
+            t.addCell(PdfKit.cell(e.checkedMoment() ? Shown.sum(u, e.sumMomentNm(), e.relMoment(), Dimension.MOMENT)
+                    + " about " + e.referenceNode() : "-", f, shade));
+            t.addCell(PdfKit.cell(!e.checkedFx() && !e.checkedFy() && !e.checkedMoment() ? "not checked" : e.balanced() ? "balanced"
+                    : "!! OUT OF BALANCE", f, shade));
+            t.addCell(PdfKit.cell(e.note(), SMALL, shade));
         }
-        doc.add(t);
+        kit.doc.add(t);
     }
 
-    private void comparison(Document doc, Model m) throws DocumentException {
-        heading(doc, "4  Claims compared");
-        para(doc, "Each claim against the stiffness-method and force-method values. Difference relative to the computed "
-                + "value; the tolerance and where it comes from are given per claim: (default) reactions 3%, member forces 5%, "
+    private void comparison(Model m) throws DocumentException {
+        int given = m.claims().stream().mapToInt(cs -> cs.claims().size()).sum();
+        if (given == 0) {
+            results(m);
+            return;
+        }
+        kit.heading("Claims compared");
+        kit.para("Each claim against the stiffness-method and force-method values. Difference relative to the computed "
+                + "value; where the computed value is no larger than the absolute floor (a small fraction of the largest value "
+                + "of its kind, below which a relative difference means nothing) the difference is given in units and judged "
+                + "against the floor. Tolerances and where they come from: (default) reactions 3%, member forces 5%, "
                 + "deflections 10% (common practice), (file) set in the claims file, (claim) set on the claim, (--tolerance) "
-                + "set by the checker. Rows marked !! are mismatches, ? marginal.", body);
+                + "set by the checker. Displacements in " + Shown.unit(m.units(), Dimension.LENGTH) + ", with the span ratio of a "
+                + "member's deflection. Rows marked !! are mismatches, ? marginal.", BODY);
         UnitSystem u = m.units();
+        if (!review.analysis().stable()) {
+            kit.para("The model is unstable, so none of the " + given + " claims can be compared: correct the supports or "
+                    + "releases (section 3) and check again.", BOLD);
+        }
         Set<String> combos = new LinkedHashSet<>();
         for (ClaimResult c : review.claims()) combos.add(c.claim().combo());
-        int given = m.claims().stream().mapToInt(cs -> cs.claims().size()).sum();
-        if (!review.analysis().stable() && given > 0) {
-            para(doc, "The model is unstable, so none of the " + given + " claims can be compared: correct the supports or "
-                    + "releases (section 3) and check again.", bold);
-        } else if (combos.isEmpty()) {
-            para(doc, "No claims were given: the report lists the model's results only (see the JSON).", body);
-        }
         for (String combo : combos) {
             LoadSet set = review.analysis().loadSets().stream().filter(s -> s.name().equals(combo)).findFirst().orElse(null);
             LimitState state = LimitState.ofEnvelope(combo);
             String envelope = state == LimitState.NONE ? "envelope over all combinations" : "envelope over the " + state + " combinations";
-            para(doc, combo + (set != null ? "  -  " + set.origin() + ": " + factors(set) : "  -  " + envelope), bold);
-            PdfPTable t = table(new float[]{0.35f, 1.8f, 1.05f, 1.05f, 1.05f, 0.75f, 0.95f, 1.2f, 2.5f},
+            kit.caption(combo + (set != null ? "  -  " + set.origin() + ": " + factors(set) : "  -  " + envelope));
+            PdfPTable t = PdfKit.table(new float[]{0.3f, 1.75f, 1.2f, 1.15f, 1.15f, 0.8f, 1.1f, 1.25f, 2.3f},
                     "", "Quantity", "Claimed", "Stiffness", "Force", "Diff.", "Tolerance", "Status", "Diagnosis / governing");
             for (ClaimResult c : review.claims()) {
                 if (!c.claim().combo().equals(combo)) continue;
                 Color shade = shade(c);
-                Font f = c.status() == ClaimResult.Status.OK ? small : smallBold;
+                PdfKit.Style f = c.status() == ClaimResult.Status.OK ? SMALL : SMALL_BOLD;
                 String mark = c.status() == ClaimResult.Status.MISMATCH ? "!!" : c.status() == ClaimResult.Status.MARGINAL ? "?" : "";
-                t.addCell(cell(mark, f, shade));
-                t.addCell(cell(c.claim().item().word + " " + c.claim().name() + " " + Console.quantityLabel(c.claim(), u), f, shade));
+                t.addCell(PdfKit.cell(mark, f, shade));
+                t.addCell(PdfKit.cell(c.claim().item().word + " " + c.claim().name() + " " + Console.quantityLabel(c.claim(), u), f, shade));
                 String written = Console.asWritten(c.claim(), u);
-                t.addCell(cell(value(u, c.claim().valueInternal(), c.claim().dimension()) + (written.isEmpty() ? "" : "\n(" + written + ")"),
-                        f, shade));
-                t.addCell(cell(value(u, c.computed(), c.claim().dimension()), f, shade));
-                t.addCell(cell(Double.isFinite(c.computedForce()) ? value(u, c.computedForce(), c.claim().dimension()) : "not run", f, shade));
-                t.addCell(cell(Console.pct(c.relativeDifference()), f, shade));
-                t.addCell(cell(Console.pct(c.tolerance().relative()) + " " + shortWhy(c.tolerance().why()), small, shade));
-                t.addCell(cell(c.status().word.toUpperCase(Locale.ROOT), f, shade));
+                String[] pair = Shown.pair(m, c);
+                t.addCell(PdfKit.cell(pair[0] + (written.isEmpty() ? "" : "\n(" + written + ")"), f, shade));
+                t.addCell(PdfKit.cell(pair[1], f, shade));
+                t.addCell(PdfKit.cell(Double.isFinite(c.computedForce()) ? pair[2] : "not run", f, shade));
+                t.addCell(PdfKit.cell(Shown.difference(u, c), f, shade));
+                t.addCell(PdfKit.cell(Shown.byFloor(c) ? Shown.tolerance(u, c) : Shown.tolerance(u, c) + " " + shortWhy(c.tolerance().why()), SMALL, shade));
+                t.addCell(PdfKit.cell(c.status().word.toUpperCase(Locale.ROOT), f, shade));
                 String gov = LimitState.isEnvelope(c.claim().combo()) || c.governing().contains(" with loads on ") ? "governs: " + c.governing() : "";
                 String diagnosis = c.explanation() > 0
                         ? "E" + c.explanation() + " (below)" + (c.ownDiagnosis() != null ? "; this claim alone: " + c.ownDiagnosis() : "")
                         : c.ownDiagnosis() != null ? c.ownDiagnosis()
                         : c.status() != ClaimResult.Status.OK ? "not explained by any change tried" : gov;
-                t.addCell(cell(diagnosis, small, shade));
+                t.addCell(PdfKit.cell(diagnosis, SMALL, shade));
             }
-            doc.add(t);
+            kit.doc.add(t);
         }
-        explanations(doc);
+        explanations();
+    }
+
+    /**
+     * Section 4 of a model with no claims: the computed reactions and member peaks of each
+     * load set, for the checker to compare by hand (the JSON, when asked for, has them all).
+     */
+    private void results(Model m) throws DocumentException {
+        kit.heading("Computed results (no claims were given)");
+        Analysis a = review.analysis();
+        if (!a.stable()) {
+            kit.para("The model is unstable, so there are no results to list: correct the supports or releases (section 3) "
+                    + "and check again.", BOLD);
+            return;
+        }
+        boolean small = m.members().size() <= Sketch.LABEL_LIMIT && a.loadSets().size() <= 24;
+        kit.para("No claims were given, so nothing is compared. " + (small
+                ? "The stiffness-method reactions and member peaks of every load set follow, for comparison by hand."
+                : "The model is too large to list its results here (" + m.members().size() + " members, " + a.loadSets().size()
+                + " load sets); write them with --json."), BODY);
+        if (!small) return;
+        UnitSystem u = m.units();
+        String f = u.force().symbol(), mo = u.symbol(Dimension.MOMENT), d = Shown.unit(u, Dimension.LENGTH);
+        for (LoadSet s : a.loadSets()) {
+            LoadSetResult r = a.solutions().get(a.primaryEngine()).get(s.name());
+            kit.caption("Load set " + s.name() + (r.patterned() ? " (envelope over the pattern arrangements: upper / lower)" : ""));
+            PdfPTable t = PdfKit.table(new float[]{1.4f, 1.5f, 1.5f, 1.5f}, "Reaction at", "Fx (" + f + ")", "Fy (" + f + ")", "Mz (" + mo + ")");
+            for (var sup : m.supports().values()) {
+                t.addCell(PdfKit.cell(sup.node(), SMALL, null));
+                for (int c = 0; c < 3; c++) {
+                    Dimension dim = c == 2 ? Dimension.MOMENT : Dimension.FORCE;
+                    String v = !sup.reacts(c) ? "-" : r.patterned()
+                            ? Console.fmt(Shown.value(u, r.reaction(sup.node(), c, true), dim)) + " / "
+                            + Console.fmt(Shown.value(u, r.reaction(sup.node(), c, false), dim))
+                            : Console.fmt(Shown.value(u, r.reaction(sup.node(), c, true), dim));
+                    t.addCell(PdfKit.cell(v, SMALL, null));
+                }
+            }
+            kit.doc.add(t);
+            PdfPTable p = PdfKit.table(new float[]{1.2f, 1.2f, 1.2f, 1.2f, 1.2f, 1.2f, 1.6f}, "Member", "N max (" + f + ")",
+                    "N min (" + f + ")", "V abs (" + f + ")", "M max (" + mo + ")", "M min (" + mo + ")", "Deflection (" + d + ")");
+            for (var mem : m.members().values()) {
+                p.addCell(PdfKit.cell(mem.name(), SMALL, null));
+                for (Quantity q : new Quantity[]{Quantity.N_MAX, Quantity.N_MIN, Quantity.V_ABS, Quantity.M_MAX, Quantity.M_MIN}) {
+                    p.addCell(PdfKit.cell(Console.fmt(Shown.value(u, r.peak(mem.name(), q).value(), q.dimension)), SMALL, null));
+                }
+                double defl = r.peak(mem.name(), Quantity.DEFLECTION).value();
+                String ratio = Shown.spanRatio(defl, m.lengthM(mem));
+                p.addCell(PdfKit.cell(Console.fmt(Shown.value(u, defl, Dimension.LENGTH)) + (ratio.isEmpty() ? "" : " (" + ratio + ")"), SMALL, null));
+            }
+            kit.doc.add(p);
+        }
     }
 
     /** What went wrong with the claim set as a whole: the explanations, each with the claims that support it. */
-    private void explanations(Document doc) throws DocumentException {
+    private void explanations() throws DocumentException {
         if (review.claims().stream().allMatch(c -> c.status() == ClaimResult.Status.OK)) return;
-        para(doc, "Explanations of the claim set", bold);
+        kit.caption("Explanations of the claim set");
         if (review.explanations().isEmpty()) {
-            para(doc, "No single change tried (a unit, a sign convention or a scale over the claims; a load case left out, "
+            kit.para("No single change tried (a unit, a sign convention or a scale over the claims; a load case left out, "
                     + "doubled or scaled; a case missing from a combination; load factors left out; self-weight twice; "
                     + "pattern loading omitted; a support's fixity; a load on another member) brings two or more flagged "
-                    + "claims, or every claim, within tolerance. The flagged claims need the originator's answer.", body);
+                    + "claims, or every claim, within tolerance. The flagged claims need the originator's answer.", BODY);
             return;
         }
-        para(doc, "Each change below was made once and every claim compared again (" + review.claims().size()
+        kit.para("Each change below was made once and every claim compared again (" + review.claims().size()
                 + " claims). A change is a lead for the originator, not a finding: the count of claims it explains is the "
-                + "evidence for it.", body);
+                + "evidence for it.", BODY);
         for (int i = 0; i < review.explanations().size(); i++) {
             var e = review.explanations().get(i);
-            para(doc, "E" + (i + 1) + "  " + e.sentence() + " (" + e.support() + ")"
-                    + (e.breaks().isEmpty() ? "" : "; it would break " + String.join(", ", e.breaks())), small);
+            kit.para("E" + (i + 1) + "  " + e.sentence() + " (" + e.support() + ")"
+                    + (e.breaks().isEmpty() ? "" : "; it would break " + String.join(", ", e.breaks())), SMALL);
         }
     }
 
@@ -495,138 +444,160 @@ public final class PdfReport {
 
     static String factors(LoadSet s) {
         List<String> parts = new ArrayList<>();
-        for (var e : s.factors().entrySet()) parts.add(String.format(Locale.ROOT, "%.4g %s", e.getValue(), e.getKey()));
+        for (var e : s.factors().entrySet()) parts.add(Console.fmt(e.getValue()).replaceAll("\\.?0+$", "") + " " + e.getKey());
         return String.join(" + ", parts);
     }
 
-    private void queries(Document doc, Model m) throws DocumentException {
-        heading(doc, "5  Queries for the originator");
-        List<ClaimResult> flagged = review.claims().stream().filter(c -> c.status() != ClaimResult.Status.OK).toList();
+    private void queries(Model m) throws DocumentException {
+        kit.heading("Queries for the originator");
+        List<ClaimResult> flagged = flagged();
         List<ClaimedEquilibrium> off = review.equilibrium().stream().filter(e -> !e.balanced()).toList();
         if (flagged.isEmpty() && off.isEmpty()) {
-            para(doc, "None.", body);
+            kit.para("None.", BODY);
             return;
         }
         UnitSystem u = m.units();
-        PdfPTable t = table(new float[]{0.5f, 4.5f, 3f}, "No.", "Query", "Originator's response");
+        PdfPTable t = PdfKit.table(new float[]{0.5f, 4.5f, 3f}, "No.", "Query", "Originator's response");
         int k = 1;
         for (ClaimResult c : flagged) {
-            String q = String.format(Locale.ROOT, "%s: claimed %s, computed %s (%s). %s", label(c.claim()),
-                    value(u, c.claim().valueInternal(), c.claim().dimension()), value(u, c.computed(), c.claim().dimension()),
-                    Console.pct(c.relativeDifference()), c.diagnosis() == null ? "Please confirm the value and how it was found."
+            String[] pair = Shown.pair(m, c);
+            String q = String.format(Locale.ROOT, "%s: claimed %s, computed %s (%s). %s", label(c.claim()), pair[0], pair[1],
+                    Shown.difference(u, c), c.diagnosis() == null ? "Please confirm the value and how it was found."
                             : "Possible cause: " + c.diagnosis() + ". Please confirm or correct.");
-            t.addCell(cell("Q" + k++, smallBold, null));
-            t.addCell(cell(q, small, null));
-            PdfPCell space = cell(" ", small, null);
-            space.setMinimumHeight(42);
-            t.addCell(space);
+            query(t, k++, q);
         }
         for (ClaimedEquilibrium e : off) {
-            t.addCell(cell("Q" + k++, smallBold, null));
-            t.addCell(cell("The claimed reactions of " + e.combo() + " do not balance the applied loads (see section 3). Please "
-                    + "check the load total and the reactions.", small, null));
-            PdfPCell space = cell(" ", small, null);
-            space.setMinimumHeight(42);
-            t.addCell(space);
+            query(t, k++, "The claimed reactions of " + e.combo() + " do not balance the applied loads (see section 3). Please "
+                    + "check the load total and the reactions.");
         }
-        doc.add(t);
+        kit.doc.add(t);
     }
 
-    private void diagrams(Document doc, PdfWriter writer, Model m) throws DocumentException {
+    private static void query(PdfPTable t, int k, String q) {
+        t.addCell(PdfKit.cell("Q" + k, SMALL_BOLD, null));
+        t.addCell(PdfKit.cell(q, SMALL, null));
+        PdfPCell space = PdfKit.cell(" ", SMALL, null);
+        space.setMinimumHeight(42);
+        t.addCell(space);
+    }
+
+    private void diagrams(Model m) throws DocumentException {
         Analysis a = review.analysis();
         if (!a.stable()) return;
-        heading(doc, "6  Diagrams for the governing load sets");
-        para(doc, "Stiffness-method results. Moment is drawn on the tension face (positive, sagging, towards each member's "
-                + "local -y side); axial and shear force are drawn positive on the local +y side (above a beam drawn left to "
-                + "right). Each member's largest and smallest values are labelled in "
-                + m.units().force().symbol() + " and " + m.units().length().symbol() + ".", body);
-        for (String name : DrawnLoadSets.choose(review)) {
+        kit.heading("Diagrams of the load sets", 300); // the heading, the legend and the first diagram
+        DrawnLoadSets.Choice choice = DrawnLoadSets.choose(review);
+        kit.para("Stiffness-method results, drawn for " + choice.why() + ". Moment is drawn on the tension face (positive, "
+                + "sagging, towards each member's local -y side); axial and shear force are drawn positive on the local +y side "
+                + "(above a beam drawn left to right). Each member's largest and smallest values are labelled in "
+                + m.units().force().symbol() + " and " + m.units().symbol(Dimension.MOMENT) + ", displacements in "
+                + Shown.unit(m.units(), Dimension.LENGTH) + ". A pattern-loaded set is drawn as its envelope (upper and lower "
+                + "curves over every arrangement), the values the tables give.", BODY);
+        for (String name : choice.names()) {
             LoadSetResult r = a.solutions().get(a.primaryEngine()).get(name);
             Solution s = r.representative();
-            para(doc, "Load set " + name + (r.patterned() ? " (every patterned load on; tabulated peaks are the envelope's)" : ""), bold);
-            for (Drawings.Kind k : Drawings.Kind.values()) {
-                if (Drawings.blank(m, s, k)) continue; // e.g. shear and moment of a truss under joint loads
-                // caption and picture kept on one page
-                PdfPTable box = new PdfPTable(1);
-                box.setWidthPercentage(100);
-                box.setKeepTogether(true);
-                PdfPCell cap = new PdfPCell(new Phrase(k.title + " - " + name, small));
-                cap.setBorder(Rectangle.NO_BORDER);
-                box.addCell(cap);
-                PdfPCell pic = new PdfPCell(picture(writer, 499, 150, g -> Drawings.diagram(g, m, s, k, 499, 150)), true);
-                pic.setBorder(Rectangle.NO_BORDER);
-                box.addCell(pic);
-                box.setSpacingAfter(4);
-                doc.add(box);
+            boolean captioned = false;
+            for (Diagrams.Kind k : Diagrams.Kind.values()) {
+                if (Diagrams.blank(m, s, k)) continue; // e.g. shear and moment of a truss under joint loads
+                String caption = (captioned ? "" : "Load set " + name + (r.patterned() ? " (envelope over the pattern arrangements)" : "")
+                        + ": ") + k.title + (r.patterned() && k == Diagrams.Kind.DEFLECTION ? "; envelope of the transverse deflection" : "");
+                captioned = true;
+                String[] note = {""};
+                var picture = kit.picture(499, 150, g -> note[0] = Diagrams.diagram(g, m, r, k, 499, 150, false));
+                kit.figure(caption, picture, note[0].isEmpty() ? null : note[0]);
             }
         }
     }
 
-    private void working(Document doc) throws DocumentException {
+    private void working() throws DocumentException {
         EngineResult force = review.analysis().engines().get("force");
-        heading(doc, "7  Force-method working");
+        kit.heading("Force-method working");
         if (force == null || force.declined() || !force.stable()) {
             String why = force == null ? String.join("; ", notes) : force.instability();
-            para(doc, "The force method was not run for this model" + (why == null || why.isEmpty() ? "." : ": " + why), body);
+            kit.para("The force method was not run for this model" + (why == null || why.isEmpty() ? "." : ": " + why), BODY);
             return;
         }
         var w = force.working();
-        for (String n : force.notes()) para(doc, n, small);
+        for (String n : force.notes()) kit.para(n, SMALL);
         if (w == null || !w.listed()) {
-            if (w != null) for (String n : w.lines()) para(doc, n, small); // the size of a matrix too large to list
+            if (w != null) for (String n : w.lines()) kit.para(n, SMALL); // the size of a matrix too large to list
             return;
         }
+        UnitSystem u = review.analysis().model().units();
         List<String> red = w.redundants();
-        para(doc, "Flexibility coefficients delta_ij = sum of integral(m_i m_j / EI + n_i n_j / EA) + 1/k of springs, "
-                + "in SI units (m/N, rad/N, m/(N*m), rad/(N*m)); redundant i is a unit force or moment:", body);
-        float[] widths = new float[red.size() + 1];
+        int n = red.size();
+        double[][] flex = new double[n][n];
+        double largest = 0;
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                // displacement at i (a length, or a rotation for a moment) per unit redundant j (a force or a moment)
+                flex[i][j] = u.fromInternal(w.flexibility()[i][j], new Dimension(-1, (moment(red.get(i)) ? 0 : 1) - (moment(red.get(j)) ? 1 : 0), 0, 0));
+                largest = Math.max(largest, Math.abs(flex[i][j]));
+            }
+        }
+        int exp = largest == 0 ? 0 : (int) Math.floor(Math.log10(largest));
+        String f = u.force().symbol(), l = u.length().symbol();
+        kit.caption("Flexibility coefficients delta_ij = sum of integral(m_i m_j / EI + n_i n_j / EA) + 1/k of springs: the "
+                + "displacement at redundant i per unit redundant j, in " + l + "/" + f + " (force-force), rad/" + f + " or "
+                + l + "/(" + f + "*" + l + ") (mixed), rad/(" + f + "*" + l + ") (moment-moment); every entry x 10^" + exp + ":");
+        float[] widths = new float[n + 1];
         Arrays.fill(widths, 1f);
         widths[0] = 1.2f;
-        String[] heads = new String[red.size() + 1];
+        String[] heads = new String[n + 1];
         heads[0] = "delta_ij";
-        for (int i = 0; i < red.size(); i++) heads[i + 1] = red.get(i);
-        PdfPTable t = table(widths, heads);
-        for (int i = 0; i < red.size(); i++) {
-            t.addCell(cell(red.get(i), smallBold, null));
-            for (int j = 0; j < red.size(); j++) t.addCell(cell(String.format(Locale.ROOT, "%.5g", w.flexibility()[i][j]), small, null));
+        for (int i = 0; i < n; i++) heads[i + 1] = red.get(i);
+        PdfPTable t = PdfKit.table(widths, heads);
+        for (int i = 0; i < n; i++) {
+            t.addCell(PdfKit.cell(red.get(i), SMALL_BOLD, null));
+            for (int j = 0; j < n; j++) t.addCell(PdfKit.cell(Console.fmt(flex[i][j] / Math.pow(10, exp)), SMALL, null));
         }
-        doc.add(t);
-        para(doc, "Compatibility: delta z + Delta_0 = 0 per load case; Delta_i0 is the displacement of the released "
-                + "structure at redundant i under the case's loads, temperatures and settlements; z the redundant values (N, N*m):", body);
-        String[] heads2 = new String[2 * red.size() + 1];
+        kit.doc.add(t);
+        kit.caption("Compatibility: delta z + Delta_0 = 0 per load case; Delta_i0 is the displacement of the released "
+                + "structure at redundant i under the case's loads, temperatures and settlements (" + l + " or rad); z the "
+                + "redundant values (" + f + " or " + u.symbol(Dimension.MOMENT) + "):");
+        String[] heads2 = new String[2 * n + 1];
         heads2[0] = "Load case";
-        for (int i = 0; i < red.size(); i++) {
+        for (int i = 0; i < n; i++) {
             heads2[1 + i] = "Delta_0 " + red.get(i);
-            heads2[1 + red.size() + i] = red.get(i);
+            heads2[1 + n + i] = red.get(i);
         }
-        float[] w2 = new float[2 * red.size() + 1];
+        float[] w2 = new float[2 * n + 1];
         Arrays.fill(w2, 1f);
-        PdfPTable t2 = table(w2, heads2);
+        PdfPTable t2 = PdfKit.table(w2, heads2);
         for (var e : w.deltaZero().entrySet()) {
-            t2.addCell(cell(e.getKey(), smallBold, null));
-            for (double d : e.getValue()) t2.addCell(cell(String.format(Locale.ROOT, "%.5g", d), small, null));
-            for (double z : w.values().get(e.getKey())) t2.addCell(cell(String.format(Locale.ROOT, "%.5g", z), small, null));
+            t2.addCell(PdfKit.cell(e.getKey(), SMALL_BOLD, null));
+            double[] d0 = e.getValue(), z = w.values().get(e.getKey());
+            for (int i = 0; i < n; i++) {
+                t2.addCell(PdfKit.cell(Console.fmt(u.fromInternal(d0[i], moment(red.get(i)) ? Dimension.NONE : Dimension.LENGTH)), SMALL, null));
+            }
+            for (int i = 0; i < n; i++) {
+                t2.addCell(PdfKit.cell(Console.fmt(u.fromInternal(z[i], moment(red.get(i)) ? Dimension.MOMENT : Dimension.FORCE)), SMALL, null));
+            }
         }
-        doc.add(t2);
+        kit.doc.add(t2);
     }
 
-    private void warnings(Document doc) throws DocumentException {
-        heading(doc, "8  Plausibility warnings");
+    /** True for a redundant that is a moment (a member end moment or a support's moment), from its label. */
+    static boolean moment(String redundant) {
+        return redundant.endsWith(".M_start") || redundant.endsWith(".M_end") || redundant.endsWith(".Mz");
+    }
+
+    private void warnings() throws DocumentException {
+        kit.heading("Plausibility warnings");
         if (review.warnings().isEmpty()) {
-            para(doc, "None: the input values lie within the usual ranges checked (common practice).", body);
+            kit.para("None: the input values lie within the usual ranges checked (common practice).", BODY);
             return;
         }
-        PdfPTable t = table(new float[]{2f, 3f, 3f}, "Where", "Found", "Rule of thumb");
+        PdfPTable t = PdfKit.table(new float[]{2f, 3f, 3f}, "Where", "Found", "Rule of thumb");
         for (var w : review.warnings()) {
-            t.addCell(cell(w.subject(), small, null));
-            t.addCell(cell(w.message(), small, null));
-            t.addCell(cell(w.rule(), small, null));
+            t.addCell(PdfKit.cell(w.subject(), SMALL, null));
+            t.addCell(PdfKit.cell(w.message(), SMALL, null));
+            t.addCell(PdfKit.cell(w.rule(), SMALL, null));
         }
-        doc.add(t);
+        kit.doc.add(t);
     }
 
-    private void cautions(Document doc) throws DocumentException {
-        heading(doc, "9  Assumptions and cautions");
+    private void cautions() throws DocumentException {
+        kit.heading("Assumptions and cautions");
         String[] items = {
                 "Linear elastic material, small displacements and rotations (first-order analysis); no buckling, P-delta, "
                         + "cracking, yielding or dynamic effects.",
@@ -637,23 +608,23 @@ public final class PdfReport {
                 "Tolerances are those stated per claim; a claim within tolerance is consistent with this model, not proven right.",
                 CAUTION,
         };
-        for (String s : items) para(doc, "-  " + s, body);
+        for (String s : items) kit.para("-  " + s, BODY);
     }
 
-    private void signOff(Document doc, Model m) throws DocumentException {
-        heading(doc, "10  Sign-off");
+    private void signOff(Model m) throws DocumentException {
+        kit.heading("Sign-off");
         PdfPTable t = new PdfPTable(new float[]{1.4f, 2.3f, 1.4f, 1.6f});
         t.setWidthPercentage(100);
         t.setKeepTogether(true);
         String[][] rows = {{"Checked by", m.job().checker()}, {"Originator", m.job().originator()}, {"Reviewed by", ""}};
         for (String[] r : rows) {
-            t.addCell(cell(r[0], smallBold, null));
-            PdfPCell name = cell(r[1], small, null);
+            t.addCell(PdfKit.cell(r[0], SMALL_BOLD, null));
+            PdfPCell name = PdfKit.cell(r[1], SMALL, null);
             name.setMinimumHeight(30);
             t.addCell(name);
-            t.addCell(cell("Signature / date", smallBold, null));
-            t.addCell(cell(" ", small, null));
+            t.addCell(PdfKit.cell("Signature / date", SMALL_BOLD, null));
+            t.addCell(PdfKit.cell(" ", SMALL, null));
         }
-        doc.add(t);
+        kit.doc.add(t);
     }
 }

@@ -58,6 +58,7 @@ public final class ResultsTree {
         UnitSystem u = m.units();
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("tool", map("name", "plumbline", "version", TOOL_VERSION));
+        root.put("caution", PdfReport.CAUTION); // the same caution as every report page, for results read without the report
         root.put("input", map("files", inputs.files(), "sha256", inputs.sha256()));
         root.put("units", map("force", u.force().symbol(), "length", u.length().symbol()));
         root.put("determinacy", determinacy(a.determinacy()));

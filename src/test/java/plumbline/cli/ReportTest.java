@@ -79,8 +79,18 @@ class ReportTest {
         for (JsonNode h : tree.get("input").get("sha256")) assertTrue(text.contains(h.asText()), "hash " + h);
         assertTrue(text.contains(tree.get("determinacy").get("classification").asText()));
         String unitForce = tree.get("units").get("force").asText();
+        boolean imperial = tree.get("units").get("length").asText().matches("ft|in");
         for (JsonNode c : tree.get("claims")) {
-            String claimed = Console.fmt(c.get("claimed").asDouble()), computed = Console.fmt(c.get("computed").asDouble());
+            // the report shows a claim's values to four significant figures of the larger, both alike; a
+            // displacement in mm (or in); a computed value under a millionth of the claim's floor is rounding, shown as 0
+            boolean length = c.get("quantity").asText().matches("deflection|ux|uy");
+            double toShown = !length ? 1 : imperial ? 12 / (tree.get("units").get("length").asText().equals("ft") ? 1 : 12) : 1000;
+            double claimedValue = c.get("claimed").asDouble() * toShown;
+            double computedValue = Math.abs(c.get("computed").asDouble()) <= 1e-6 * c.get("absolute_floor").asDouble()
+                    ? 0 : c.get("computed").asDouble() * toShown;
+            double larger = Math.max(Math.abs(claimedValue), Math.abs(computedValue));
+            int decimals = larger == 0 ? 0 : Math.min(9, Math.max(0, 3 - (int) Math.floor(Math.log10(larger))));
+            String claimed = shown(claimedValue, decimals), computed = shown(computedValue, decimals);
             assertTrue(text.contains(claimed), "claimed " + claimed + " of " + c.get("id"));
             assertTrue(text.contains(computed), "computed " + computed + " of " + c.get("id"));
             assertTrue(text.contains(c.get("status").asText().toUpperCase()), "status of " + c.get("id"));
@@ -90,6 +100,12 @@ class ReportTest {
         assertEquals(anyMismatch, java.util.regex.Pattern.compile("!! (reaction|member|displacement) ").matcher(text).find(),
                 "flag marks follow the statuses");
         assertFalse(unitForce.isEmpty());
+    }
+
+    /** A value to a fixed number of decimals, a rounded zero unsigned. */
+    static String shown(double v, int decimals) {
+        String s = String.format(java.util.Locale.ROOT, "%." + decimals + "f", v);
+        return s.matches("-[0.]+") ? s.substring(1) : s;
     }
 
     @org.junit.jupiter.api.Test

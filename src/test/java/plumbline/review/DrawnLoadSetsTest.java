@@ -1,6 +1,7 @@
 package plumbline.review;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
@@ -17,33 +18,54 @@ class DrawnLoadSetsTest {
     @Test
     void withNoClaimsTheCombinationWithTheLargestMomentIsDrawn() {
         Review r = ReviewTest.review("", Double.NaN);
-        assertEquals(List.of("asce7-strength/2"), DrawnLoadSets.choose(r));
+        assertEquals(List.of("asce7-strength/2"), DrawnLoadSets.choose(r).names());
     }
 
     @Test
-    void flaggedClaimsComeFirstThenTheOthers() {
-        // R_A under D is wL/2 = 30 kN: 45 is flagged, L's 15 kN is right
+    void everyLoadSetWithAFlaggedClaimIsDrawnAndNoOther() {
+        // R_A under D is wL/2 = 10 * 6 / 2 = 30 kN and under L 5 * 6 / 2 = 15 kN (statics by hand): 45 and 30 are flagged;
+        // the envelope's M_max = 1.2 * 10 + 1.6 * 5 = 20 kN/m * 6^2 / 8 = 90 kN*m (ASCE 7 2.3.1 combination 2) is right
         Review r = ReviewTest.review("""
                 claims:
                   reactions:
-                    - {node: A, combo: L, Fy: 15}
-                    - {node: A, combo: D, Fy: 45}
-                """, Double.NaN);
-        assertEquals(List.of("D", "L"), DrawnLoadSets.choose(r));
-    }
-
-    @Test
-    void theSetGoverningAnEnvelopeClaimComesBeforeOtherClaimsSetsAndAtMostTwoAreDrawn() {
-        Review r = ReviewTest.review("""
-                claims:
-                  reactions:
-                    - {node: A, combo: L, Fy: 15}
+                    - {node: A, combo: L, Fy: 30}
                     - {node: A, combo: D, Fy: 45}
                   members:
                     - {member: M1, combo: envelope, M_max: 90}
                 """, Double.NaN);
+        DrawnLoadSets.Choice c = DrawnLoadSets.choose(r);
+        assertEquals(List.of("L", "D"), c.names());
+        assertTrue(c.why().contains("every load set with a flagged claim (2: L, D)"), c.why());
+    }
+
+    @Test
+    void aFlaggedEnvelopeClaimDrawsTheLoadSetThatGovernsIt() {
+        Review r = ReviewTest.review("""
+                claims:
+                  reactions:
+                    - {node: A, combo: L, Fy: 15}
+                  members:
+                    - {member: M1, combo: envelope, M_max: 60}
+                """, Double.NaN);
+        DrawnLoadSets.Choice c = DrawnLoadSets.choose(r);
+        assertEquals(List.of("asce7-strength/2"), c.names());
+        assertTrue(c.why().startsWith("the load set with a flagged claim, asce7-strength/2"), c.why());
+    }
+
+    @Test
+    void withNothingFlaggedTheSetGoverningAnEnvelopeClaimComesFirstAndAtMostTwoAreDrawnNamingTheRest() {
+        Review r = ReviewTest.review("""
+                claims:
+                  reactions:
+                    - {node: A, combo: L, Fy: 15}
+                    - {node: A, combo: D, Fy: 30}
+                  members:
+                    - {member: M1, combo: envelope, M_max: 90}
+                """, Double.NaN);
         assertEquals(2, DrawnLoadSets.AT_MOST);
-        assertEquals(List.of("D", "asce7-strength/2"), DrawnLoadSets.choose(r));
+        DrawnLoadSets.Choice c = DrawnLoadSets.choose(r);
+        assertEquals(List.of("asce7-strength/2", "L"), c.names());
+        assertTrue(c.why().endsWith("; not drawn: D"), c.why());
     }
 
     static Review beam(String loads) {
@@ -59,9 +81,9 @@ class DrawnLoadSetsTest {
                   D: {type: dead, member_loads: [{member: M1, w: -10}]}
                   L: {type: live, member_loads: [{member: M1, w: -100}]}
                 """;
-        assertEquals(List.of("C"), DrawnLoadSets.choose(beam(loads + "combinations: {C: {D: 1.0}}\n")));
-        assertEquals(List.of("L"), DrawnLoadSets.choose(beam(loads)));
+        assertEquals(List.of("C"), DrawnLoadSets.choose(beam(loads + "combinations: {C: {D: 1.0}}\n")).names());
+        assertEquals(List.of("L"), DrawnLoadSets.choose(beam(loads)).names());
         // a tie (two equal combinations) keeps the first
-        assertEquals(List.of("C1"), DrawnLoadSets.choose(beam(loads + "combinations: {C1: {D: 1.0}, C2: {D: 1.0}}\n")));
+        assertEquals(List.of("C1"), DrawnLoadSets.choose(beam(loads + "combinations: {C1: {D: 1.0}, C2: {D: 1.0}}\n")).names());
     }
 }
