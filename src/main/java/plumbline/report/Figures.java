@@ -5,10 +5,12 @@ import java.awt.Graphics2D;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.function.Consumer;
 import javax.imageio.ImageIO;
 import plumbline.model.LoadCase;
@@ -50,7 +52,11 @@ public final class Figures {
             k++;
         }
         if (a.stable()) {
+            Set<String> stems = new HashSet<>();
             for (String name : sets) {
+                // two names that differ only in characters a file name cannot carry get distinct files
+                String stem = safe(name);
+                for (int n = 2; !stems.add(stem); n++) stem = safe(name) + "-" + n;
                 LoadSetResult r = a.solutions().get(a.primaryEngine()).get(name);
                 Solution s = r.representative();
                 for (Diagrams.Kind kind : Diagrams.Kind.values()) {
@@ -58,7 +64,7 @@ public final class Figures {
                     String unit = Shown.unit(m.units(), kind.dimension);
                     String title = job + " - load set " + name + (r.patterned() ? " (envelope)" : "") + " - "
                             + kind.title.replaceAll(" \\(.*", "") + " (" + unit + ")";
-                    out.put(safe(name) + "-" + kind.name().toLowerCase(Locale.ROOT) + ".png",
+                    out.put(stem + "-" + kind.name().toLowerCase(Locale.ROOT) + ".png",
                             png(499, 150, title, g -> Diagrams.diagram(g, m, r, kind, 499, 150, true)));
                 }
             }

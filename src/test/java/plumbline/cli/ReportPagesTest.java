@@ -203,6 +203,42 @@ class ReportPagesTest {
     }
 
     @Test
+    void loadSetsWhoseNamesDifferOnlyOutsideAsciiGetFiguresOfTheirOwn() throws Exception {
+        Path model = tempDir.resolve("names.yaml");
+        Files.writeString(model, NON_LATIN + "  Gж: {type: live, member_loads: [{member: 梁2, w: -5}]}\n"
+                + "claims:\n  reactions:\n    - {node: Α, combo: Gк, Fy: 99}\n    - {node: Α, combo: Gж, Fy: 99}\n");
+        Path figures = Files.createDirectories(tempDir.resolve("figures"));
+        CliRunner r = CliRunner.run("check", model.toString(), "--figures", figures.toString());
+        assertEquals(1, r.code(), r.err());
+        assertTrue(Files.exists(figures.resolve("G_-moment.png")) && Files.exists(figures.resolve("G_-2-moment.png")),
+                "both flagged load sets drawn, neither file overwritten");
+    }
+
+    @Test
+    void aLongTitleIsShortenedInTheFooterAndTheResultsCarryTheCaution() throws Exception {
+        Path model = tempDir.resolve("long.yaml");
+        String title = "Roof of the north annex ".repeat(12).strip();
+        Files.writeString(model, NON_LATIN.replace("Γέφυρα – 桥 ≤ test of names", title));
+        Path json = tempDir.resolve("r.json");
+        List<String> pages = pages(check(tempDir, model.toString(), "--json", json.toString()));
+        for (int p = 0; p < pages.size(); p++) {
+            List<String> lines = new ArrayList<>(List.of(pages.get(p).strip().split("\\R")));
+            String footer = lines.get(lines.size() - 1);
+            assertTrue(footer.matches("Plumbline \\S+ discrepancy report - Roof of the north annex.*\\.\\.\\. ?page " + (p + 1) + " of "
+                    + pages.size()), "the footer's title is cut short before the page number: " + footer);
+        }
+        assertTrue(Files.readString(json).contains("\"caution\" : \"This is an independent check of a simplified"), "caution in the JSON");
+    }
+
+    @Test
+    void theConsoleGivesTheMomentSumOfClaimedReactionsInMomentUnits() {
+        // portal-frame claims: the reactions of ULS-W are out of balance (a sign slip at E), sums printed with their own units
+        CliRunner r = CliRunner.run("check", "samples/portal-frame.yaml", "--claims", "samples/portal-frame-claims.yaml");
+        String out = r.out().replaceAll("\\s+", " ");
+        assertTrue(Pattern.compile("sum Fx -?[0-9.]+ kN; sum Fy -?[0-9.]+ kN; sum M about A -?[0-9.]+ kN\\*m").matcher(out).find(), out);
+    }
+
+    @Test
     void noNumberPrintsInENotationOrAsMinusZeroAndAClaimedZeroIsNotAHundredPercent() throws Exception {
         // the truss's claimed Fx = 0 at L0 is computed as rounding (about 1e-15 kN): judged by the floor, shown as 0
         String text = String.join("\n", pages(check(tempDir, "samples/footbridge-truss.yaml", "--claims",
