@@ -216,8 +216,18 @@ public final class Console {
         if (!Double.isFinite(v)) return "n/a";
         double a = Math.abs(v);
         if (a == 0) return "0";
-        if (a >= 1e-6 && a < 1e9) return fixed(v, Math.max(0, 3 - (int) Math.floor(Math.log10(a))));
+        if (a >= 1e-6 && a < 1e9) return fixed(v, decimals(a));
         return String.format(Locale.ROOT, "%.3e", v);
+    }
+
+    /**
+     * The decimals that give a magnitude four significant figures, counted after rounding:
+     * 9.99996 rounds up to 10.000, so it gets one decimal fewer ("10.00", as 10.0 prints).
+     */
+    static int decimals(double magnitude) {
+        int digits = Math.max(0, 3 - (int) Math.floor(Math.log10(magnitude)));
+        boolean roundsUp = digits > 0 && Math.abs(Double.parseDouble(fixed(magnitude, digits))) >= Math.pow(10, 4 - digits);
+        return roundsUp ? digits - 1 : digits;
     }
 
     /** A value with a fixed number of decimals, never "-0.00": a value that rounds to zero prints unsigned. */

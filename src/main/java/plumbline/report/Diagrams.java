@@ -51,6 +51,22 @@ public final class Diagrams {
         }
     }
 
+    /**
+     * The height in points of a diagram 499 pt wide: enough for the model's proportions (a
+     * frame gets more than a beam) plus room for the ordinates, between 150 and 230.
+     */
+    public static float height(Model m) {
+        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY, minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+        for (Node n : m.nodes().values()) {
+            minX = Math.min(minX, n.xM());
+            maxX = Math.max(maxX, n.xM());
+            minY = Math.min(minY, n.yM());
+            maxY = Math.max(maxY, n.yM());
+        }
+        double aspect = (maxY - minY) / Math.max(maxX - minX, 1e-9);
+        return (float) Math.max(150, Math.min(230, 120 + 200 * aspect));
+    }
+
     /** Samples per member piece for drawing (labels use the exact peaks). */
     private static final int SAMPLES = 24;
 
@@ -109,7 +125,7 @@ public final class Diagrams {
     public static String diagram(Graphics2D g, Model m, LoadSetResult r, Kind kind, double w, double h, boolean noteInside) {
         String note = "";
         Ink.prepare(g);
-        double margin = Math.min(w, h) * 0.24;
+        double margin = Math.min(36, Math.min(w, h) * 0.24); // room for the ordinates and their labels
         Ink.Frame f = Ink.Frame.fit(m, w, h, margin);
         boolean labelled = m.members().size() <= Sketch.LABEL_LIMIT;
         Ink.Labels labels = new Ink.Labels(g, w, h);
@@ -184,7 +200,7 @@ public final class Diagrams {
                 : new BasicStroke(2.0f));
         if (!zero) g.draw(new Line2D.Double(f.x(a.xM()), f.y(a.yM()), f.x(b.xM()), f.y(b.yM())));
         if (!labelled) return;
-        String text = zero ? "0" : Console.fmt(m.units().fromInternal(v, Dimension.FORCE)) + (compression ? " C" : " T");
+        String text = zero ? "0" : Console.fmt(m.units().fromInternal(Math.abs(v), Dimension.FORCE)) + (compression ? " C" : " T");
         double mx = (f.x(a.xM()) + f.x(b.xM())) / 2, my = (f.y(a.yM()) + f.y(b.yM())) / 2;
         labels.place(text, Ink.Labels.at(mx, my, 0, 0), Ink.Labels.at(mx, my - 3, 0, -1), Ink.Labels.at(mx, my + 3, 0, 1));
     }

@@ -65,7 +65,7 @@ public final class Figures {
                     String title = job + " - load set " + name + (r.patterned() ? " (envelope)" : "") + " - "
                             + kind.title.replaceAll(" \\(.*", "") + " (" + unit + ")";
                     out.put(stem + "-" + kind.name().toLowerCase(Locale.ROOT) + ".png",
-                            png(499, 150, title, g -> Diagrams.diagram(g, m, r, kind, 499, 150, true)));
+                            png(499, (int) Diagrams.height(m), title, g -> Diagrams.diagram(g, m, r, kind, 499, Diagrams.height(m), true)));
                 }
             }
         }

@@ -502,7 +502,8 @@ public final class PdfReport {
                         + ": ") + k.title + (r.patterned() && k == Diagrams.Kind.DEFLECTION ? "; envelope of the transverse deflection" : "");
                 captioned = true;
                 String[] note = {""};
-                var picture = kit.picture(499, 150, g -> note[0] = Diagrams.diagram(g, m, r, k, 499, 150, false));
+                float h = Diagrams.height(m);
+                var picture = kit.picture(499, h, g -> note[0] = Diagrams.diagram(g, m, r, k, 499, h, false));
                 kit.figure(caption, picture, note[0].isEmpty() ? null : note[0]);
             }
         }

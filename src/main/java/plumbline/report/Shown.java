@@ -70,7 +70,7 @@ final class Shown {
         double[] v = {c.claim().valueInternal(), denoised(c.computed(), c.absoluteFloor()), denoised(c.computedForce(), c.absoluteFloor())};
         double largest = 0;
         for (double x : v) if (Double.isFinite(x)) largest = Math.max(largest, Math.abs(value(u, x, d)));
-        int decimals = largest == 0 ? 0 : Math.min(9, Math.max(0, 3 - (int) Math.floor(Math.log10(largest))));
+        int decimals = largest == 0 ? 0 : Math.min(9, Console.decimals(largest));
         String[] out = new String[3];
         boolean deflection = c.claim().quantity() == Quantity.DEFLECTION || c.claim().quantity() == Quantity.DEFLECTION_AT;
         double span = deflection && m.member(c.claim().name()) != null ? m.lengthM(m.member(c.claim().name())) : 0;
