@@ -56,8 +56,9 @@ public final class Main implements Runnable {
 
     public static void main(String[] args) {
         System.setProperty("java.awt.headless", "true");
-        PrintWriter out = new PrintWriter(System.out, true);
-        PrintWriter err = new PrintWriter(System.err, true);
+        // in the terminal's encoding, characters it cannot show written as [U+XXXX] (never '?')
+        PrintWriter out = ConsoleText.writer(System.out, ConsoleText.terminal());
+        PrintWriter err = ConsoleText.writer(System.err, ConsoleText.terminal());
         System.exit(run(args, out, err));
     }
 }

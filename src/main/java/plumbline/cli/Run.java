@@ -6,8 +6,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import plumbline.io.OutputBatch;
 import plumbline.io.OutputFiles;
 import plumbline.model.InputException;
 import plumbline.model.Problem;
@@ -58,12 +60,11 @@ final class Run {
         Inputs in;
         try {
             in = Inputs.load(o.model(), o.claims());
-            if (json != null) OutputFiles.refuseInputs(json, in.files, "--json");
-            if (pdf != null) OutputFiles.refuseInputs(pdf, in.files, "--pdf");
-            if (figures != null && !Files.isDirectory(figures)) {
-                throw new InputException(new Problem(SourceRef.none(figures.toString()), "--figures",
-                        "is not an existing folder; expected a folder for the PNG files"));
-            }
+            // every output path is checked before any work, so a bad one costs no solve and writes nothing
+            Map<String, Path> outputs = new LinkedHashMap<>();
+            outputs.put("--json", json);
+            outputs.put("--pdf", pdf);
+            OutputBatch.checkPaths(outputs, figures, in.files);
         } catch (InputException e) {
             return inputProblems(e, err);
         }
@@ -90,49 +91,38 @@ final class Run {
         for (var e : a.engines().values()) {
             if (e.declined()) notes.add(e.engine() + " method not run: " + e.instability() + "; the results are the other method's alone");
         }
-        byte[] report = null;
-        if (pdf != null) {
-            // rendered in full before anything is written, so a failure leaves no file behind
-            report = PdfReport.render(r, new ResultsTree.Inputs(in.names(), in.sha256()), agreement, notes,
-                    LocalDate.now());
-        }
-        if (json != null) {
-            Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
-            tree.put("notes", notes);
-            try {
+        // every output is made in full before any is written, then all are written together or none
+        OutputBatch batch = new OutputBatch();
+        Map<String, byte[]> pictures = null;
+        try {
+            if (json != null) {
+                Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
+                tree.put("notes", notes);
                 // large results are written compact: indentation would double a file of many megabytes
-                OutputFiles.writeAtomically(json, OutputFiles.json(tree, in.model.members().size() <= COMPACT_JSON_ABOVE));
-            } catch (IOException e) {
-                err.println(json + ": cannot write the results: " + e.getMessage());
-                return Main.INTERNAL;
+                batch.add(json, OutputFiles.json(tree, in.model.members().size() <= COMPACT_JSON_ABOVE), "--json");
             }
+            if (pdf != null) {
+                batch.add(pdf, PdfReport.render(r, new ResultsTree.Inputs(in.names(), in.sha256()), agreement, notes,
+                        LocalDate.now()), "--pdf");
+            }
+            if (figures != null) {
+                pictures = Figures.render(r, DrawnLoadSets.choose(r).names());
+                for (var p : pictures.entrySet()) batch.add(figures.resolve(p.getKey()), p.getValue(), "--figures");
+            }
+        } catch (InputException e) {
+            return inputProblems(e, err);
+        } catch (IOException e) {
+            err.println("plumbline: cannot make the outputs: " + e.getMessage() + "; nothing was written");
+            return Main.INTERNAL;
+        }
+        try {
+            batch.commit();
+        } catch (IOException e) {
+            err.println("plumbline: cannot write the outputs (" + e.getClass().getSimpleName() + ": " + e.getMessage()
+                    + "); nothing was written, and files of the same names were left as they were");
+            return Main.INTERNAL;
         }
         String names = String.join(" and ", a.solutions().keySet()) + (a.solutions().size() == 1 ? " method" : " methods");
-        Map<String, byte[]> pictures = null;
-        if (figures != null) {
-            try {
-                pictures = Figures.render(r, DrawnLoadSets.choose(r).names());
-            } catch (IOException e) {
-                err.println("plumbline: cannot draw the figures: " + e.getMessage());
-                return Main.INTERNAL;
-            }
-        }
-        if (pictures != null) {
-            try {
-                for (var p : pictures.entrySet()) OutputFiles.writeAtomically(figures.resolve(p.getKey()), p.getValue());
-            } catch (IOException e) {
-                err.println(figures + ": cannot write the figures: " + e.getMessage());
-                return Main.INTERNAL;
-            }
-        }
-        if (report != null) {
-            try {
-                OutputFiles.writeAtomically(pdf, report);
-            } catch (IOException e) {
-                err.println(pdf + ": cannot write the report: " + e.getMessage());
-                return Main.INTERNAL;
-            }
-        }
         out.print(Console.summary(r, a.solutions().isEmpty() ? "none" : names, agreement));
         if (!o.checking()) out.print(Console.results(r));
         for (String n : notes) out.print(Console.wrap("Note: " + n, "  "));

@@ -1,6 +1,10 @@
 package plumbline.io;
 
 import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.Charset;
+import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -72,17 +76,79 @@ public final class ModelReader {
                 throw new InputException(new Problem(SourceRef.none(name), "(file)",
                         "file is " + Files.size(path) + " bytes; at most " + TreeReader.MAX_CHARS + " are read"));
             }
-            byte[] bytes = Files.readAllBytes(path);
-            String text = new String(bytes, StandardCharsets.UTF_8);
-            if (text.indexOf('\0') >= 0) {
-                throw new InputException(new Problem(SourceRef.none(name), "(file)",
-                        "the file holds binary data; expected a YAML, JSON or CSV text file"));
-            }
-            if (!text.isEmpty() && text.charAt(0) == '\uFEFF') text = text.substring(1);
-            return text;
+            return decode(name, Files.readAllBytes(path));
         } catch (IOException e) {
             throw new InputException(new Problem(SourceRef.none(name), "(file)", "cannot read: " + e.getMessage()));
         }
+    }
+
+    /**
+     * The text of a file's bytes: UTF-8 (with or without a byte-order mark), or UTF-16 as some
+     * spreadsheet and editor exports save it (told by its byte-order mark, or by the zero
+     * bytes of ASCII text in UTF-16 without one). Bytes that are not valid UTF-8 are refused
+     * with the line they are on, rather than read as replacement characters: a name that
+     * silently changed would no longer match the calc package.
+     */
+    static String decode(String name, byte[] bytes) throws InputException {
+        Charset cs = StandardCharsets.UTF_8;
+        int skip = 0;
+        if (bytes.length >= 2 && (bytes[0] & 0xFF) == 0xFE && (bytes[1] & 0xFF) == 0xFF) {
+            cs = StandardCharsets.UTF_16BE;
+            skip = 2;
+        } else if (bytes.length >= 2 && (bytes[0] & 0xFF) == 0xFF && (bytes[1] & 0xFF) == 0xFE) {
+            cs = StandardCharsets.UTF_16LE;
+            skip = 2;
+        } else if (bytes.length >= 4 && bytes.length % 2 == 0 && bytes[0] != 0 && bytes[1] == 0 && bytes[2] != 0 && bytes[3] == 0) {
+            cs = StandardCharsets.UTF_16LE;
+        } else if (bytes.length >= 4 && bytes.length % 2 == 0 && bytes[0] == 0 && bytes[1] != 0 && bytes[2] == 0 && bytes[3] != 0) {
+            cs = StandardCharsets.UTF_16BE;
+        }
+        String text;
+        try {
+            text = cs.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT)
+                    .decode(ByteBuffer.wrap(bytes, skip, bytes.length - skip)).toString();
+        } catch (CharacterCodingException e) {
+            if (cs != StandardCharsets.UTF_8 || hasZero(bytes)) {
+                throw new InputException(new Problem(SourceRef.none(name), "(file)",
+                        "the file holds binary data; expected a YAML, JSON or CSV text file"));
+            }
+            int bad = firstBadUtf8(bytes), line = 1, column = 1;
+            for (int i = 0; i < bad; i++) {
+                if (bytes[i] == '\n') {
+                    line++;
+                    column = 1;
+                } else if ((bytes[i] & 0xC0) != 0x80) {
+                    column++;
+                }
+            }
+            throw new InputException(new Problem(new SourceRef(name, line, column), "(file)", String.format(Locale.ROOT,
+                    "byte 0x%02X is not UTF-8 text (the file may be saved as Latin-1 or Windows-1252); expected the file "
+                            + "saved as UTF-8", bytes[bad] & 0xFF)));
+        }
+        if (text.indexOf('\0') >= 0) {
+            throw new InputException(new Problem(SourceRef.none(name), "(file)",
+                    "the file holds binary data; expected a YAML, JSON or CSV text file"));
+        }
+        if (!text.isEmpty() && text.charAt(0) == '\uFEFF') text = text.substring(1);
+        return text;
+    }
+
+    private static boolean hasZero(byte[] bytes) {
+        for (byte b : bytes) if (b == 0) return true;
+        return false;
+    }
+
+    /** The index of the first byte that does not continue a valid UTF-8 sequence. */
+    private static int firstBadUtf8(byte[] b) {
+        int i = 0;
+        while (i < b.length) {
+            int c = b[i] & 0xFF, n = c < 0x80 ? 0 : c >= 0xC2 && c < 0xE0 ? 1 : c >= 0xE0 && c < 0xF0 ? 2 : c >= 0xF0 && c < 0xF5 ? 3 : -1;
+            if (n < 0 || i + n >= b.length && n > 0) return i;
+            for (int k = 1; k <= n; k++) if ((b[i + k] & 0xC0) != 0x80) return i;
+            i += n + 1;
+        }
+        return Math.max(0, b.length - 1);
     }
 
     public static Model read(String file, String text, boolean yaml) throws InputException {

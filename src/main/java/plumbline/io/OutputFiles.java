@@ -3,10 +3,8 @@ package plumbline.io;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.List;
 import java.util.Map;
 import plumbline.model.InputException;
@@ -14,8 +12,8 @@ import plumbline.model.Problem;
 import plumbline.model.SourceRef;
 
 /**
- * Writes output files safely: never over an input file, always through a temporary file
- * in the same folder renamed into place, so a failed run leaves no partial file.
+ * Output helpers: the refusal of an output path that is an input file, and the results
+ * tree as JSON text. The files of a run are written by {@link OutputBatch}.
  */
 public final class OutputFiles {
 
@@ -42,21 +40,6 @@ public final class OutputFiles {
         if (dir != null && !Files.isDirectory(dir)) {
             throw new InputException(new Problem(SourceRef.none(out.toString()), option,
                     "folder " + dir + " does not exist; expected an existing folder"));
-        }
-    }
-
-    public static void writeAtomically(Path out, byte[] bytes) throws IOException {
-        Path dir = out.toAbsolutePath().getParent();
-        Path tmp = Files.createTempFile(dir, "." + out.getFileName() + ".", ".part");
-        try {
-            Files.write(tmp, bytes);
-            try {
-                Files.move(tmp, out, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, out, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
         }
     }
 

@@ -4,6 +4,10 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.yaml.snakeyaml.error.Mark;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
@@ -71,6 +75,7 @@ final class TreeReader {
             }
             return root;
         } catch (JsonProcessingException e) {
+            if (yaml && e.getCause() instanceof MarkedYAMLException y) throw new InputException(yamlProblem(y, text));
             JsonLocation loc = e.getLocation();
             String msg = e.getOriginalMessage();
             if (msg != null) msg = msg.replaceAll("\\s+", " ").trim();
@@ -83,6 +88,75 @@ final class TreeReader {
             throw new InputException(new Problem(SourceRef.none(file), "(syntax)",
                     "cannot read the file as " + (yaml ? "YAML" : "JSON") + ": " + shorten(String.valueOf(e.getMessage()))));
         }
+    }
+
+    /**
+     * A YAML syntax error in the tool's own words, at the place a reader must change: where
+     * an unclosed bracket or quote was opened, where a key lacks its ": ", at the tab itself,
+     * or at the line whose indentation breaks the block (the parser's own position is often
+     * the token after the mistake, a line or two later).
+     */
+    Problem yamlProblem(MarkedYAMLException y, String text) {
+        Mark problem = y.getProblemMark(), context = y.getContextMark();
+        String what = String.valueOf(y.getProblem()), where = String.valueOf(y.getContext());
+        Mark at = problem != null ? problem : context;
+        String message;
+        if (what.contains("TAB")) {
+            message = "a tab character; YAML indents with spaces only: replace the tab with spaces";
+        } else if (where.contains("flow sequence") || where.contains("flow mapping")) {
+            boolean seq = where.contains("sequence");
+            at = context != null ? context : at;
+            message = "the '" + (seq ? "[" : "{") + "' opened here is not closed: expected ',' or '" + (seq ? "]" : "}")
+                    + "' before line " + (problem == null ? "?" : problem.getLine() + 1);
+        } else if (where.contains("quoted scalar")) {
+            at = context != null ? context : at;
+            message = "the quote opened here is not closed; expected a closing quote on the same value";
+        } else if (what.contains("could not find expected ':'")) {
+            at = context != null ? context : at;
+            message = "expected 'key: value' here, with a space after the ':' (or the line below is indented too far)";
+        } else if (what.contains("mapping values are not allowed")) {
+            String line = line(text, at.getLine());
+            int colon = line.indexOf(':');
+            int before = previousLine(text, at.getLine());
+            Matcher glued = before < 0 ? null : Pattern.compile("^\\s*[^\\s:#\\-][^:]*(:)[^\\s:]").matcher(line(text, before));
+            if (glued != null && glued.find()) {
+                // "A:[0, 0]" read as one text, so the error surfaces on the next line: the missing space is the mistake
+                at = new Mark(at.getName(), 0, before, glued.start(1), new int[0], 0);
+                message = "expected 'key: value' here, with a space after the ':'";
+            } else if (colon > 1024) {
+                at = lineStart(at);
+                message = "a key of " + line.strip().indexOf(':') + " characters; YAML keys are at most 1024 characters: "
+                        + "expected a shorter name";
+            } else {
+                message = "a ':' where a value was expected: this line is indented more than the key above it, or a value "
+                        + "holds ': ' and needs quotes";
+            }
+        } else if (what.contains("expected <block end>") || what.contains("did not find expected key")
+                || what.contains("did not find expected '-'")) {
+            message = "the indentation of this line does not match the lines above (a key at the level of a list, or a "
+                    + "list item at the level of keys); expected the same indentation as its neighbours";
+        } else {
+            message = "this is not valid YAML: check the indentation, the space after each ':', and that quotes and "
+                    + "brackets are closed";
+        }
+        return new Problem(at == null ? SourceRef.none(file) : new SourceRef(file, at.getLine() + 1, at.getColumn() + 1),
+                "(syntax)", message);
+    }
+
+    private static String line(String text, int index) {
+        String[] lines = text.split("\\R", -1);
+        return index >= 0 && index < lines.length ? lines[index] : "";
+    }
+
+    /** The index of the last non-blank line before line {@code index} (0-based), or -1. */
+    private static int previousLine(String text, int index) {
+        String[] lines = text.split("\\R", -1);
+        for (int i = Math.min(index, lines.length) - 1; i >= 0; i--) if (!lines[i].isBlank() && !lines[i].strip().startsWith("#")) return i;
+        return -1;
+    }
+
+    private static Mark lineStart(Mark m) {
+        return new Mark(m.getName(), m.getIndex() - m.getColumn(), m.getLine(), 0, new int[0], 0);
     }
 
     private static String shorten(String s) {

@@ -97,8 +97,19 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         List<ClaimResult> out = new ArrayList<>();
         Map<String, Analysis> variantCache = new HashMap<>();
         String primary = a.primaryEngine();
+        // the same claim written twice with the same value is compared once, so it is not counted twice; a warning
+        // names both places (contradicting values are refused on reading; a plain envelope claim may be written
+        // once for the upper and once for the lower value, and then both are compared)
+        Map<String, Claim> seen = new HashMap<>();
+        List<Plausibility.Warning> repeats = new ArrayList<>();
         for (ClaimSet cs : a.model().claims()) {
             for (Claim c : cs.claims()) {
+                Claim before = seen.putIfAbsent(c.id() + "=" + c.valueInternal(), c);
+                if (before != null) {
+                    repeats.add(new Plausibility.Warning("each quantity is claimed once", c.at().file() + ":" + c.at().line(),
+                            "the same claim as " + before.at().file() + ":" + before.at().line() + " (" + c.id() + "); compared once"));
+                    continue;
+                }
                 if (primary == null) continue;
                 Value v = value(a, primary, c);
                 double force = a.solutions().containsKey("force") ? value(a, "force", c).value : Double.NaN;
@@ -128,6 +139,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         Safeguards guards = Safeguards.of(a);
         Verdict verdict = verdict(a.stable(), guards, out, eq.stream().allMatch(ClaimedEquilibrium::balanced));
         List<Plausibility.Warning> warnings = new ArrayList<>(Plausibility.check(a.model()));
+        warnings.addAll(repeats);
         for (var e : a.engines().values()) {
             for (var w : e.warnings()) warnings.add(new Plausibility.Warning(w.rule(), e.engine() + " method", w.found()));
         }

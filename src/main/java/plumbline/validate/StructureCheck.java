@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import plumbline.model.LoadCase;
@@ -48,8 +49,15 @@ public final class StructureCheck {
                 out.add(new Problem(mem.at(), "members." + mem.name(), "starts and ends at node " + mem.from()
                         + "; expected two different nodes"));
             } else if (m.lengthM(mem) <= tol) {
-                out.add(new Problem(mem.at(), "members." + mem.name(), "has zero length (nodes " + mem.from() + " and "
-                        + mem.to() + " coincide); expected a member of positive length"));
+                double lm = m.lengthM(mem);
+                String length = lm == 0 ? "zero length (nodes " + mem.from() + " and " + mem.to() + " coincide)"
+                        : String.format(Locale.ROOT, "a length of %.3g %s, too short beside the model's extent of %.4g %s: "
+                                + "members shorter than %.0e of the extent (%.3g %s) are taken as coincident nodes, since the "
+                                + "solution would lose its accuracy", m.units().length().fromInternal(lm), m.units().length().symbol(),
+                        m.units().length().fromInternal(extent), m.units().length().symbol(), COINCIDENT_FRACTION,
+                        m.units().length().fromInternal(tol), m.units().length().symbol());
+                out.add(new Problem(mem.at(), "members." + mem.name(), "has " + length + "; expected a member of positive length"
+                        + (lm == 0 ? "" : " (merge the two nodes, or model the short piece in a separate model)")));
             }
         }
         Map<String, String> cells = new HashMap<>();
