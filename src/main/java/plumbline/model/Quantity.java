@@ -59,6 +59,9 @@ public enum Quantity {
      */
     public enum Place { PEAK, START, END, AT }
 
+    /** values() copies its array on every call; the lookups below run once per claim and member, so they share one. */
+    private static final Quantity[] ALL = values();
+
     public final String symbol;
     public final Claim.Kind item;
     public final Dimension dimension;
@@ -99,20 +102,20 @@ public enum Quantity {
     /** The member peaks, in the order of the format (what the results list per member). */
     public static List<Quantity> peaks() {
         List<Quantity> out = new ArrayList<>();
-        for (Quantity q : values()) if (q.isPeak()) out.add(q);
+        for (Quantity q : ALL) if (q.isPeak()) out.add(q);
         return out;
     }
 
     /** The quantities a claim of this kind may name, in the order of the format. */
     public static List<Quantity> of(Claim.Kind item) {
         List<Quantity> out = new ArrayList<>();
-        for (Quantity q : values()) if (q.item == item) out.add(q);
+        for (Quantity q : ALL) if (q.item == item) out.add(q);
         return out;
     }
 
     /** The quantity of this kind written {@code symbol}, or null when there is none. */
     public static Quantity of(Claim.Kind item, String symbol) {
-        for (Quantity q : values()) if (q.item == item && q.symbol.equals(symbol)) return q;
+        for (Quantity q : ALL) if (q.item == item && q.symbol.equals(symbol)) return q;
         return null;
     }
 
@@ -124,7 +127,7 @@ public enum Quantity {
     /** The other extreme of the same function (M_min for M_max); a magnitude or a component is its own. */
     public Quantity otherExtreme() {
         if (extreme == null || extreme == Extreme.ABS) return this;
-        for (Quantity q : values()) {
+        for (Quantity q : ALL) {
             if (q.item == item && q.function == function && q.component == component && q.extreme != null
                     && q.extreme != extreme && q.extreme != Extreme.ABS) {
                 return q;
@@ -140,7 +143,7 @@ public enum Quantity {
 
     /** The largest magnitude of the same function (M_abs for M_max); the deflection is its own. */
     public Quantity magnitude() {
-        for (Quantity q : values()) if (q.function == function && q.extreme == Extreme.ABS && function != null) return q;
+        for (Quantity q : ALL) if (q.function == function && q.extreme == Extreme.ABS && function != null) return q;
         throw new IllegalStateException(symbol + " is not a member peak");
     }
 

@@ -2,11 +2,13 @@ package plumbline.review;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.Function;
+import java.util.function.Supplier;
 import plumbline.model.Claim;
 import plumbline.model.LimitState;
 import plumbline.model.LoadCase;
@@ -35,7 +37,11 @@ final class Diagnosis {
     /** Variant models are solved again only up to this size (each is a full solve). */
     static final int VARIANT_MEMBER_LIMIT = 2000;
 
-    private record Hypothesis(double candidate, String sentence) {
+    /**
+     * A candidate value and the sentence that would explain the claim by it; the sentence is
+     * written only for the few candidates kept (a claim may have hundreds: one per member).
+     */
+    private record Hypothesis(double candidate, Supplier<String> sentence) {
     }
 
     /** A unit a number may really have been in: its label and its value in SI. */
@@ -73,6 +79,16 @@ final class Diagnosis {
 
     static String explain(Analysis a, String engine, Claim c, double computed, double tolerance, Engine variantEngine,
                           Map<String, Analysis> variantCache) {
+        return explain(a, engine, c, computed, tolerance, variantEngine, variantCache, new HashMap<>());
+    }
+
+    /**
+     * As above, with {@code readings} shared between the claims of one review: the computed
+     * value of a quantity at every member (or support, or node) of a load set, read once and
+     * looked up by every claim that asks whether it was read from the wrong line.
+     */
+    static String explain(Analysis a, String engine, Claim c, double computed, double tolerance, Engine variantEngine,
+                          Map<String, Analysis> variantCache, Map<String, Map<String, Double>> readings) {
         List<Hypothesis> hs = new ArrayList<>();
         Model m = a.model();
         String what = describe(c);
@@ -83,7 +99,7 @@ final class Diagnosis {
             for (Slip s : slips(c.dimension())) {
                 double inSlip = computed / s.toSi;
                 if (sameUnit(s, c.writtenUnit())) continue;
-                hs.add(new Hypothesis(inSlip * factorOfWritten(c), String.format(Locale.ROOT,
+                hs.add(new Hypothesis(inSlip * factorOfWritten(c), () -> String.format(Locale.ROOT,
                         "claimed %s = %s %s equals the computed %s %s expressed in %s (%s): likely unit slip", what,
                         fmt(c.writtenValue()), c.writtenUnit(), fmt(shownComputed), unitShown, s.label, fmt(inSlip))));
             }
@@ -91,9 +107,9 @@ final class Diagnosis {
         // an input slip scales a linear result as a whole: loads in psf read as kPa (or the
         // reverse) scale every force; E in ksi read as MPa, or MPa as GPa, scales deflections
         double psf = LBF / (FT * FT);
-        hs.add(new Hypothesis(computed * 1e3 / psf, String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: "
+        hs.add(new Hypothesis(computed * 1e3 / psf, () -> String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: "
                 + "loads written in kPa where psf were meant (or values mixed between the two)", what, fmt(shownComputed), unitShown, 1e3 / psf)));
-        hs.add(new Hypothesis(computed * psf / 1e3, String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: "
+        hs.add(new Hypothesis(computed * psf / 1e3, () -> String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: "
                 + "loads written in psf where kPa were meant", what, fmt(shownComputed), unitShown, psf / 1e3)));
         if (c.dimension().equals(Dimension.LENGTH) || c.dimension().equals(Dimension.ANGLE)) {
             double ksi = 1e3 * LBF / (IN * IN);
@@ -104,11 +120,11 @@ final class Diagnosis {
                     case 2 -> "E in the originator's run appears a thousand times too small (written in MPa where GPa were meant)";
                     default -> "E in the originator's run appears a thousand times too large (written in GPa where MPa were meant)";
                 };
-                hs.add(new Hypothesis(computed * r[0], String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: %s",
+                hs.add(new Hypothesis(computed * r[0], () -> String.format(Locale.ROOT, "claimed %s is the computed %s %s times %.4g: %s",
                         what, fmt(shownComputed), unitShown, r[0], why)));
             }
         }
-        hs.add(new Hypothesis(-computed, String.format(Locale.ROOT,
+        hs.add(new Hypothesis(-computed, () -> String.format(Locale.ROOT,
                 "claimed %s has the opposite sign of the computed %s %s: a sign slip or another sign convention "
                         + "(reactions here are forces on the structure; M is positive sagging)", what, fmt(shownComputed), unitShown)));
         LoadSetResult here = a.solutions().get(engine).get(c.combo());
@@ -122,17 +138,23 @@ final class Diagnosis {
                 if (q.place != c.quantity().place) continue; // an end value against a peak is no swap either
                 Claim alt = with(c, c.name(), q, c.combo());
                 double v = Review.of(here, alt).value();
-                hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s matches the computed %s of the same %s (%s %s): "
+                hs.add(new Hypothesis(v, () -> String.format(Locale.ROOT, "claimed %s matches the computed %s of the same %s (%s %s): "
                         + "components or quantities swapped", what, q, c.item() == Claim.Kind.MEMBER ? "member" : "node",
                         fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
             }
             // another support or member
             List<String> names = c.item() == Claim.Kind.REACTION ? new ArrayList<>(m.supports().keySet())
                     : c.item() == Claim.Kind.DISPLACEMENT ? new ArrayList<>(m.nodes().keySet()) : new ArrayList<>(m.members().keySet());
+            Map<String, Double> atEach = readings.computeIfAbsent(engine + "|" + c.combo() + "|" + c.item() + "|" + c.quantity()
+                    + "|" + c.atM(), k -> {
+                Map<String, Double> values = new HashMap<>();
+                for (String n : names) values.put(n, Review.of(here, with(c, n, c.quantity(), c.combo())).value());
+                return values;
+            });
             for (String n : names) {
                 if (n.equals(c.name())) continue;
-                double v = Review.of(here, with(c, n, c.quantity(), c.combo())).value();
-                hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s is the computed value at %s %s (%s %s): "
+                double v = atEach.get(n);
+                hs.add(new Hypothesis(v, () -> String.format(Locale.ROOT, "claimed %s is the computed value at %s %s (%s %s): "
                         + "read from the wrong line", what, c.item() == Claim.Kind.MEMBER ? "member" : "node", n,
                         fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
             }
@@ -141,7 +163,7 @@ final class Diagnosis {
         for (LoadSet s : a.loadSets()) {
             if (s.name().equals(c.combo())) continue;
             double v = Review.of(a.solutions().get(engine).get(s.name()), with(c, c.name(), c.quantity(), s.name())).value();
-            hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the computed value under %s %s (%s %s): "
+            hs.add(new Hypothesis(v, () -> String.format(Locale.ROOT, "claimed %s equals the computed value under %s %s (%s %s): "
                     + "another combination was used", what, s.combination() ? "combination" : "load case", s.name(),
                     fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
         }
@@ -153,9 +175,10 @@ final class Diagnosis {
                 v += Review.of(a.solutions().get(engine).get(cs), with(c, c.name(), c.quantity(), cs)).value();
             }
             if (c.item() != Claim.Kind.MEMBER) {
-                hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with the loads of %s "
+                double total = v;
+                hs.add(new Hypothesis(total, () -> String.format(Locale.ROOT, "claimed %s equals the value with the loads of %s "
                         + "unfactored (%s %s): load factors left out, or service-level (ASD) loads against a strength "
-                        + "combination", what, c.combo(), fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
+                        + "combination", what, c.combo(), fmt(m.units().fromInternal(total, c.dimension())), unitShown)));
             }
         }
         // allowable-stress (service) level against a strength combination: the ASCE 7 ASD
@@ -170,7 +193,7 @@ final class Diagnosis {
                 Solution sol = Superposition.combine(a.engineModel(), s.name(), parts,
                         MemberFunctions.SHARED);
                 double v = Review.of(new LoadSetResult.Plain(sol), c).value();
-                hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the allowable-stress combination %s "
+                hs.add(new Hypothesis(v, () -> String.format(Locale.ROOT, "claimed %s equals the allowable-stress combination %s "
                         + "(%s %s): ASD (service-level) loads against a strength combination", what, s.name(),
                         fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
             }
@@ -183,12 +206,12 @@ final class Diagnosis {
             String side = upper ? "lower" : "upper";
             String advice = c.item() == Claim.Kind.REACTION ? "claim it as " + c.quantity().symbol + (upper ? "_min" : "_max")
                     : "a displacement claim is compared with the bound on its sign's side";
-            hs.add(new Hypothesis(other, String.format(Locale.ROOT, "claimed %s equals the %s bound under pattern loading (%s %s): %s",
+            hs.add(new Hypothesis(other, () -> String.format(Locale.ROOT, "claimed %s equals the %s bound under pattern loading (%s %s): %s",
                     what, side, fmt(m.units().fromInternal(other, c.dimension())), unitShown, advice)));
         }
         if (here != null && here.patterned()) {
             double v = Review.of(new LoadSetResult.Plain(here.representative()), c).value();
-            hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with every span loaded (%s %s): "
+            hs.add(new Hypothesis(v, () -> String.format(Locale.ROOT, "claimed %s equals the value with every span loaded (%s %s): "
                     + "pattern loading omitted", what, fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
         }
         if (variantEngine != null && m.members().size() <= VARIANT_MEMBER_LIMIT) variants(a, c, variantEngine, variantCache, hs, what, unitShown);
@@ -206,7 +229,10 @@ final class Diagnosis {
         good.sort(Comparator.comparingDouble(h -> Math.abs(claimed - h.candidate) / Math.max(Math.abs(h.candidate), 1e-300)));
         if (good.isEmpty()) return null;
         List<String> out = new ArrayList<>();
-        for (Hypothesis h : good) if (!out.contains(h.sentence)) out.add(h.sentence);
+        for (Hypothesis h : good) {
+            String sentence = h.sentence.get();
+            if (!out.contains(sentence)) out.add(sentence);
+        }
         return String.join("; or ", out.subList(0, Math.min(3, out.size())));
     }
 
@@ -234,7 +260,7 @@ final class Diagnosis {
             if (r == null) continue;
             if (LimitState.isEnvelope(c.combo())) continue;
             double v = Review.of(r, c).value();
-            hs.add(new Hypothesis(v, String.format(Locale.ROOT, "claimed %s equals the value with %s (%s %s)", what, t.getKey(),
+            hs.add(new Hypothesis(v, () -> String.format(Locale.ROOT, "claimed %s equals the value with %s (%s %s)", what, t.getKey(),
                     fmt(m.units().fromInternal(v, c.dimension())), unitShown)));
         }
     }

@@ -96,6 +96,8 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
     public static Review of(Analysis a, TolerancePolicy policy, Engine variantEngine) {
         List<ClaimResult> out = new ArrayList<>();
         Map<String, Analysis> variantCache = new HashMap<>();
+        Map<String, Map<String, Double>> readings = new HashMap<>(); // shared by the diagnoses of every claim
+        Map<String, Double> largest = new HashMap<>(); // the largest value of a kind per load set, found once
         String primary = a.primaryEngine();
         // the same claim written twice with the same value is compared once, so it is not counted twice; a warning
         // names both places (contradicting values are refused on reading; a plain envelope claim may be written
@@ -114,7 +116,8 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 Value v = value(a, primary, c);
                 double force = a.solutions().containsKey("force") ? value(a, "force", c).value : Double.NaN;
                 TolerancePolicy.Applied tol = policy.forClaim(c, cs);
-                double floor = TolerancePolicy.ABSOLUTE_FLOOR_FRACTION * largestOfKind(a, primary, c, v.governing);
+                double floor = TolerancePolicy.ABSOLUTE_FLOOR_FRACTION * largest.computeIfAbsent(kindKey(c, v.governing),
+                        k -> largestOfKind(a, primary, c, v.governing));
                 if (c.dimension().equals(Dimension.LENGTH)) {
                     floor = Math.max(floor, TolerancePolicy.DISPLACEMENT_NOISE_FRACTION * a.model().extentM());
                 }
@@ -126,7 +129,7 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
                 double rel = v.value == 0 ? (diff == 0 ? 0 : Double.POSITIVE_INFINITY) : diff / Math.abs(v.value);
                 String gov = v.governing + (v.loaded.isEmpty() ? "" : " with loads on " + String.join(", ", v.loaded));
                 String diagnosis = st == ClaimResult.Status.OK ? null
-                        : Diagnosis.explain(a, primary, c, v.value, tol.relative(), variantEngine, variantCache);
+                        : Diagnosis.explain(a, primary, c, v.value, tol.relative(), variantEngine, variantCache, readings);
                 out.add(new ClaimResult(c, cs.file(), v.value, force, rel, tol, floor, st, gov, diagnosis, 0, diagnosis));
             }
         }
@@ -247,6 +250,16 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
     }
 
     /** The largest magnitude of the same kind of quantity (reaction force, moment, ...) in the load set. */
+    /** What {@link #largestOfKind} depends on: the load set, the item, and for reactions and displacements moment or force. */
+    static String kindKey(Claim c, String set) {
+        String kind = switch (c.item()) {
+            case REACTION -> c.quantity().component == 2 ? "Mz" : "F";
+            case DISPLACEMENT -> c.quantity() == Quantity.RZ ? "rz" : "u";
+            default -> c.quantity().magnitude().name();
+        };
+        return set + "|" + c.item() + "|" + kind;
+    }
+
     static double largestOfKind(Analysis a, String engine, Claim c, String set) {
         LoadSetResult r = a.solutions().get(engine).get(set);
         if (r == null) return 0;
