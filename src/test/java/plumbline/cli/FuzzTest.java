@@ -133,6 +133,90 @@ class FuzzTest {
         assertTrue(inputErrors > 0, "the mutations reach the input checks");
     }
 
+    /** Iterations of the claims fuzz; CI runs this short one, a long one takes -Dplumbline.fuzz.claims=5000. */
+    static final int CLAIM_ITERATIONS = Integer.getInteger("plumbline.fuzz.claims", 150);
+
+    /**
+     * The claim forms of format reference section 4.1 (bounds, end values, values at a position,
+     * span ratios, conventions, limit-state envelopes, trade units, CSV as spreadsheets export it)
+     * mutated the same way and checked against their models: a result or a clean input error,
+     * within seconds, never exit 3 or a stack trace, never an output file on an input error.
+     */
+    @Test
+    void claimMutantsGiveAResultOrACleanInputError() throws Exception {
+        String[][] seeds = {
+                {"samples/warehouse-joist.yaml", "samples/warehouse-joist-claims.csv"},
+                {"samples/three-span-beam.yaml", "samples/three-span-beam-claims.csv"},
+                {"samples/gable-frame-us.yaml", "samples/gable-frame-us-claims.csv"},
+                {"samples/warehouse-joist.yaml", "src/test/resources/fuzz/joist-claims-4.1.yaml"},
+                {"samples/portal-frame.yaml", "samples/portal-frame-claims.yaml"},
+        };
+        Random rnd = new Random(SEED + 41);
+        ExecutorService pool = Executors.newSingleThreadExecutor();
+        int inputErrors = 0, results = 0;
+        try {
+            for (int k = 0; k < CLAIM_ITERATIONS; k++) {
+                String[] seed = seeds[rnd.nextInt(seeds.length)];
+                String text = Files.readString(Path.of(seed[1]));
+                String mutant = seed[1].endsWith(".csv") ? mutateCsv(text, rnd) : mutate(text, rnd);
+                Path claims = tempDir.resolve("claims-" + k + (seed[1].endsWith(".csv") ? ".csv" : ".yaml"));
+                Files.writeString(claims, mutant, StandardCharsets.UTF_8);
+                Path json = tempDir.resolve("claims-out-" + k + ".json");
+                Future<CliRunner> run = pool.submit(() -> CliRunner.run("check", seed[0], "--claims", claims.toString(),
+                        "--json", json.toString()));
+                CliRunner r;
+                try {
+                    r = run.get(20, TimeUnit.SECONDS);
+                } catch (java.util.concurrent.TimeoutException e) {
+                    run.cancel(true);
+                    save(k, mutant);
+                    throw new AssertionError("claims mutant " + k + " of " + seed[1] + " did not finish in 20 s");
+                }
+                boolean clean = (r.code() == 0 || r.code() == 1 || r.code() == 2) && !r.err().contains("Exception")
+                        && !r.err().contains("\tat ") && !r.out().contains("NaN") && !r.out().contains("Infinity");
+                if (!clean) save(k, mutant);
+                assertTrue(clean, "claims mutant " + k + " of " + seed[1] + " gave exit " + r.code() + ":\n" + r.err() + r.out());
+                if (r.code() == 2) {
+                    inputErrors++;
+                    assertTrue(!Files.exists(json), "no output on an input error");
+                    assertTrue(Pattern.compile(":\\d+:\\d+: ").matcher(r.err()).find() || r.err().contains(":0:0: "), r.err());
+                } else {
+                    results++;
+                }
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+        assertTrue(inputErrors > 0 && results > 0, "the mutations reach both the checks and the comparison (" + inputErrors
+                + " input errors, " + results + " results)");
+    }
+
+    /** A CSV mutation: a cell replaced (by an extreme number, a unit, a span ratio, an empty cell), a separator changed, a row cut. */
+    static String mutateCsv(String text, Random rnd) {
+        List<String> lines = new ArrayList<>(List.of(text.split("\n", -1)));
+        String[] cells = {"", "0", "-0", "1e308", "NaN", "L/0", "L/360", "span/abc", "12 kN", "12 furlong", "90,0", "9.0.0",
+                "envelope:XLS", "envelope:SLS", "Fy_max", "M_start", "N", "deflection", "reaction", "member", "displacement",
+                "Z9", "\"", ";;", "kNm", "k-ft", "40%", "150%"};
+        int ops = 1 + rnd.nextInt(3);
+        for (int o = 0; o < ops && !lines.isEmpty(); o++) {
+            int i = rnd.nextInt(lines.size());
+            String line = lines.get(i);
+            char sep = line.contains(";") ? ';' : ',';
+            List<String> parts = new ArrayList<>(List.of(line.split(java.util.regex.Pattern.quote(String.valueOf(sep)), -1)));
+            switch (rnd.nextInt(5)) {
+                case 0 -> {
+                    parts.set(rnd.nextInt(parts.size()), cells[rnd.nextInt(cells.length)]);
+                    lines.set(i, String.join(String.valueOf(sep), parts));
+                }
+                case 1 -> lines.set(i, line.replace(sep, sep == ';' ? ',' : ';'));
+                case 2 -> lines.remove(i);
+                case 3 -> lines.add(i, line);
+                default -> lines.set(i, line.substring(0, rnd.nextInt(line.length() + 1)));
+            }
+        }
+        return String.join("\n", lines);
+    }
+
     private static void save(int k, String mutant) throws java.io.IOException {
         Path d = Path.of("target", "fuzz-failures");
         Files.createDirectories(d);
