@@ -4,14 +4,17 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.PosixFilePermission;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import plumbline.io.OutputFiles;
 
 /**
  * Outputs that cannot be lost or mixed up: every output path is checked before any work
@@ -108,6 +111,25 @@ class OutputsTest {
         assertFalse(Files.exists(staleOld));
         assertTrue(Files.exists(running), "another live run's working file is left alone");
         assertTrue(Files.exists(unrelated), "files not of this tool's pattern are left alone");
+    }
+
+    @Test
+    void threeRunsWritingTheSameFilesAtOnceLeaveOneWholeResult() throws Exception {
+        Path json = dir.resolve("r.json"), pdf = dir.resolve("r.pdf");
+        List<Thread> runs = new ArrayList<>();
+        int[] codes = new int[3];
+        for (int i = 0; i < 3; i++) {
+            int k = i;
+            Thread t = new Thread(() -> codes[k] = CliRunner.run("check", MODEL, "--claims", CLAIMS, "--json", json.toString(),
+                    "--pdf", pdf.toString()).code());
+            runs.add(t);
+            t.start();
+        }
+        for (Thread t : runs) t.join();
+        for (int c : codes) assertEquals(1, c);
+        assertFalse(OutputFiles.parseJson(Files.readString(json)).isEmpty(), "the results file is whole JSON (a part would not parse)");
+        assertTrue(new String(Files.readAllBytes(pdf), StandardCharsets.ISO_8859_1).strip().endsWith("%%EOF"), "a whole PDF");
+        assertEquals(List.of("r.json", "r.pdf"), files(), "no working files left");
     }
 
     @Test
