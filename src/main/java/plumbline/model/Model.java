@@ -2,6 +2,7 @@ package plumbline.model;
 
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -17,7 +18,43 @@ import plumbline.units.UnitSystem;
 public record Model(String file, Job job, UnitSystem units, Map<String, Material> materials,
                     Map<String, Section> sections, Map<String, Node> nodes, Map<String, Support> supports,
                     Map<String, Member> members, List<LoadCase> loadCases, List<Combination> combinations,
-                    List<String> standardCombinations, List<String> redundants, List<ClaimSet> claims) {
+                    List<String> standardCombinations, List<String> redundants, List<ClaimSet> claims, Geometry geometry) {
+
+    /**
+     * What the nodes' coordinates give, worked out once per model (the solvers ask for a
+     * member's length and direction many times per load set): per member {length m, cx, cy},
+     * and the model's extent.
+     */
+    public record Geometry(Map<String, double[]> members, double extentM) {
+        static Geometry of(Map<String, Node> nodes, Map<String, Member> members) {
+            Map<String, double[]> out = new HashMap<>(members.size() * 2);
+            for (Member m : members.values()) {
+                Node a = nodes.get(m.from()), b = nodes.get(m.to());
+                if (a == null || b == null) continue; // an unknown node is reported by the structure check
+                double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
+                out.put(m.name(), new double[]{len, dx / len, dy / len});
+            }
+            double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
+            double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+            for (Node n : nodes.values()) {
+                minX = Math.min(minX, n.xM());
+                maxX = Math.max(maxX, n.xM());
+                minY = Math.min(minY, n.yM());
+                maxY = Math.max(maxY, n.yM());
+            }
+            double extent = nodes.isEmpty() ? 1.0 : Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-9);
+            return new Geometry(Collections.unmodifiableMap(out), extent);
+        }
+    }
+
+    /** A model; its geometry is worked out from the nodes and members. */
+    public Model(String file, Job job, UnitSystem units, Map<String, Material> materials,
+                 Map<String, Section> sections, Map<String, Node> nodes, Map<String, Support> supports,
+                 Map<String, Member> members, List<LoadCase> loadCases, List<Combination> combinations,
+                 List<String> standardCombinations, List<String> redundants, List<ClaimSet> claims) {
+        this(file, job, units, materials, sections, nodes, supports, members, loadCases, combinations, standardCombinations,
+                redundants, claims, Geometry.of(nodes, members));
+    }
 
     public Model {
         materials = Collections.unmodifiableMap(new LinkedHashMap<>(materials));
@@ -54,12 +91,16 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
     }
 
     public double lengthM(Member m) {
-        Node a = node(m.from()), b = node(m.to());
+        double[] g = geometry.members().get(m.name());
+        if (g != null && members.get(m.name()) == m) return g[0];
+        Node a = node(m.from()), b = node(m.to()); // a member not of this model (a variant's)
         return Math.hypot(b.xM() - a.xM(), b.yM() - a.yM());
     }
 
     /** The member's unit vector from its start to its end, {cx, cy}: its local x axis in global axes. */
     public double[] directionOf(Member m) {
+        double[] g = geometry.members().get(m.name());
+        if (g != null && members.get(m.name()) == m) return new double[]{g[1], g[2]};
         Node a = node(m.from()), b = node(m.to());
         double len = lengthM(m);
         return new double[]{(b.xM() - a.xM()) / len, (b.yM() - a.yM()) / len};
@@ -80,15 +121,7 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
      * moments commensurate with forces in residuals and rank tests.
      */
     public double extentM() {
-        double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
-        for (Node n : nodes.values()) {
-            minX = Math.min(minX, n.xM());
-            maxX = Math.max(maxX, n.xM());
-            minY = Math.min(minY, n.yM());
-            maxY = Math.max(maxY, n.yM());
-        }
-        return nodes.isEmpty() ? 1.0 : Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-9);
+        return geometry.extentM();
     }
 
     /**

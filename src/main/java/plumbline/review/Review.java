@@ -10,6 +10,7 @@ import java.util.function.Function;
 import plumbline.model.Claim;
 import plumbline.model.ClaimSet;
 import plumbline.model.LimitState;
+import plumbline.model.Member;
 import plumbline.model.Quantity;
 import plumbline.solve.Engine;
 import plumbline.solve.Equilibrium;
@@ -147,17 +148,22 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
             for (var w : e.warnings()) warnings.add(new Plausibility.Warning(w.rule(), e.engine() + " method", w.found()));
         }
         if (primary != null) {
+            String rule = "deflections beyond span/50 are not credible for a linear model (common practice)";
+            int beyond = 0;
             for (LoadSet set : a.loadSets()) {
                 LoadSetResult r = a.solutions().get(primary).get(set.name());
-                for (String mem : a.model().members().keySet()) {
-                    double span = a.model().lengthM(a.model().member(mem));
-                    double d = r.peak(mem, Quantity.DEFLECTION).value();
-                    if (d > span / SPAN_OVER_DEFLECTION_MIN) {
-                        warnings.add(new Plausibility.Warning("deflections beyond span/50 are not credible for a linear model "
-                                + "(common practice)", "member " + mem + ", " + set.name(),
+                for (Member mem : a.model().members().values()) {
+                    double span = a.model().lengthM(mem);
+                    double d = r.peak(mem.name(), Quantity.DEFLECTION).value();
+                    if (d > span / SPAN_OVER_DEFLECTION_MIN && beyond++ < DEFLECTION_WARNINGS_LISTED) {
+                        warnings.add(new Plausibility.Warning(rule, "member " + mem.name() + ", " + set.name(),
                                 String.format(Locale.ROOT, "deflection = span/%.3g", span / d)));
                     }
                 }
+            }
+            if (beyond > DEFLECTION_WARNINGS_LISTED) {
+                warnings.add(new Plausibility.Warning(rule, "every load set", (beyond - DEFLECTION_WARNINGS_LISTED)
+                        + " more member deflections beyond span/50 (the first " + DEFLECTION_WARNINGS_LISTED + " are listed)"));
             }
         }
         return new Review(a, out, eq, warnings, guards, verdict, explanations);
@@ -259,6 +265,9 @@ public record Review(Analysis analysis, List<ClaimResult> claims, List<ClaimedEq
         };
         return set + "|" + c.item() + "|" + kind;
     }
+
+    /** Deflection warnings listed one by one; the rest are counted in one more warning (a report of thousands helps no one). */
+    static final int DEFLECTION_WARNINGS_LISTED = 20;
 
     static double largestOfKind(Analysis a, String engine, Claim c, String set) {
         LoadSetResult r = a.solutions().get(engine).get(set);

@@ -65,9 +65,14 @@ public record MemberActions(double lengthM, List<Linear> distributed, List<Point
     }
 
     public MemberActions scaled(double f) {
-        return new MemberActions(lengthM, distributed.stream().map(d -> d.scaled(f)).toList(),
-                points.stream().map(p -> p.scaled(f)).toList(), couples.stream().map(c -> c.scaled(f)).toList(),
-                thermalStrain * f, thermalCurvaturePerM * f);
+        // plain loops: this runs for every member of every part of every combination
+        List<Linear> d = new ArrayList<>(distributed.size());
+        for (Linear l : distributed) d.add(l.scaled(f));
+        List<Point> p = new ArrayList<>(points.size());
+        for (Point x : points) p.add(x.scaled(f));
+        List<Couple> c = new ArrayList<>(couples.size());
+        for (Couple x : couples) c.add(x.scaled(f));
+        return new MemberActions(lengthM, d, p, c, thermalStrain * f, thermalCurvaturePerM * f);
     }
 
     public MemberActions plus(MemberActions o) {

@@ -121,4 +121,28 @@ class ReviewEdgesTest {
         assertTrue(Verdict.NO_CLAIMS.meaning().contains("no claim was compared"));
         assertTrue(Verdict.ENGINES_DISAGREE.meaning().contains("force and stiffness methods"));
     }
+
+    @Test
+    void deflectionWarningsBeyondTwentyAreCountedNotListed() {
+        // 30 simple spans of 6 m under 10 kN/m with EI = 200 GPa * 1e-4 m4 / 1000 (E in MPa where GPa were meant):
+        // 5 w L^4 / (384 EI) = 5 * 10e3 * 1296 / (384 * 2e4) = 8.4 m, far beyond span/50 = 0.12 m (by hand)
+        StringBuilder nodes = new StringBuilder("nodes: {"), sup = new StringBuilder("supports: {"), mem = new StringBuilder("members: {");
+        StringBuilder all = new StringBuilder();
+        for (int i = 0; i <= 30; i++) {
+            nodes.append(i == 0 ? "" : ", ").append("N").append(i).append(": [").append(6 * i).append(", 0]");
+            sup.append(i == 0 ? "" : ", ").append("N").append(i).append(i == 0 ? ": pinned" : ": roller");
+            if (i > 0) {
+                mem.append(i == 1 ? "" : ", ").append("M").append(i).append(": {from: N").append(i - 1).append(", to: N").append(i)
+                        .append(", section: G, hinge: end}");
+                all.append(i == 1 ? "" : ", ").append("M").append(i);
+            }
+        }
+        var m = Models.yaml(Models.HEAD.replace("E: 200 GPa", "E: 200 MPa") + nodes + "}\n" + sup + "}\n" + mem + "}\n"
+                + "loads: {D: {type: dead, member_loads: [{members: [" + all + "], w: -10}]}}\n");
+        Review r = Review.of(Analysis.of(m, List.of(new StiffnessEngine())), new TolerancePolicy(Double.NaN));
+        long listed = r.warnings().stream().filter(w -> w.message().startsWith("deflection = span/")).count();
+        assertEquals(Review.DEFLECTION_WARNINGS_LISTED, listed);
+        assertTrue(r.warnings().stream().anyMatch(w -> w.message().equals("10 more member deflections beyond span/50 (the first 20 "
+                + "are listed)")), r.warnings().toString());
+    }
 }
