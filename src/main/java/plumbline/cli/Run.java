@@ -18,6 +18,7 @@ import plumbline.report.Console;
 import plumbline.report.Figures;
 import plumbline.report.PdfReport;
 import plumbline.report.ResultsTree;
+import plumbline.report.Typeface;
 import plumbline.review.Analysis;
 import plumbline.review.DrawnLoadSets;
 import plumbline.review.Review;
@@ -67,6 +68,12 @@ final class Run {
             OutputBatch.checkPaths(outputs, figures, in.files);
         } catch (InputException e) {
             return inputProblems(e, err);
+        }
+        if (pdf != null || figures != null) {
+            // the report's fonts are read on the other core while the model is solved
+            Thread fonts = new Thread(Typeface::warmUp, "font warm-up");
+            fonts.setDaemon(true);
+            fonts.start();
         }
         String tooLarge = ForceEngine.tooLarge(in.model);
         if (method == Method.force && tooLarge != null) {

@@ -1,5 +1,7 @@
 package plumbline.io;
 
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import java.io.IOException;
@@ -50,7 +52,8 @@ public final class OutputFiles {
 
     /** The tree as JSON text, indented for reading or compact (large results). */
     public static byte[] json(Map<String, Object> tree, boolean indent) throws IOException {
-        ObjectMapper m = new ObjectMapper();
+        // the shortest decimal that reads back as the same double (Schubfach), written without Double.toString's detours
+        ObjectMapper m = new ObjectMapper(JsonFactory.builder().enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER).build());
         if (indent) m.enable(SerializationFeature.INDENT_OUTPUT);
         return m.writeValueAsBytes(tree);
     }

@@ -158,7 +158,7 @@ public final class Diagrams {
                         constantAxial(g, m, f, mem, pts.get(0)[1], peak, labels, labelled);
                         continue;
                     }
-                    shape(g, m, f, mem, pts, k);
+                    shape(g, m, f, mem, pts, k, labelled);
                 }
                 if (labelled) peakLabels(g, m, f, mem, r, kind, k, labels);
             }
@@ -205,8 +205,12 @@ public final class Diagrams {
         labels.place(text, Ink.Labels.at(mx, my, 0, 0), Ink.Labels.at(mx, my - 3, 0, -1), Ink.Labels.at(mx, my + 3, 0, 1));
     }
 
-    /** The function drawn as a closed, hatched shape between the member and its ordinates. */
-    private static void shape(Graphics2D g, Model m, Ink.Frame f, Member mem, List<double[]> pts, double k) {
+    /**
+     * The function drawn as a closed shape between the member and its ordinates, hatched; on a
+     * model too large for labels, outlined only (hatching thousands of shapes a few points
+     * wide would print as grey and make the file slow to write and to open).
+     */
+    private static void shape(Graphics2D g, Model m, Ink.Frame f, Member mem, List<double[]> pts, double k, boolean hatched) {
         Node a = m.node(mem.from()), b = m.node(mem.to());
         double ex = m.directionOf(mem)[0], ey = m.directionOf(mem)[1];
         Path2D path = new Path2D.Double();
@@ -218,7 +222,13 @@ public final class Diagrams {
         }
         path.lineTo(f.x(b.xM()), f.y(b.yM()));
         path.closePath();
-        Ink.hatch(g, path, 3.0);
+        if (hatched) {
+            Ink.hatch(g, path, 3.0);
+        } else {
+            g.setColor(Ink.INK);
+            g.setStroke(new BasicStroke(0.5f));
+            g.draw(path);
+        }
     }
 
     /** A member's largest and smallest values (exact peaks; for an envelope, of the upper and lower curves). */

@@ -22,7 +22,7 @@ import com.lowagie.text.pdf.FontSelector;
  * holds a character DejaVu lacks (Chinese, Japanese, Korean). A character in neither font
  * is printed as its code point, "[U+XXXX]", so two different names never print alike.
  */
-final class Typeface {
+public final class Typeface {
 
     static final String REGULAR = "/net/sf/jasperreports/fonts/dejavu/DejaVuSans.ttf";
     static final String BOLD = "/net/sf/jasperreports/fonts/dejavu/DejaVuSans-Bold.ttf";
@@ -75,6 +75,23 @@ final class Typeface {
             throw new UncheckedIOException(e);
         } catch (FontFormatException e) {
             throw new IllegalStateException("the report font " + resource + " cannot be read: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Reads the fonts and starts Java2D's text machinery (a few tenths of a second) so that a
+     * run can do it on another core while it solves; the report then finds them ready.
+     */
+    public static void warmUp() {
+        pdf(false);
+        pdf(true);
+        java.awt.image.BufferedImage img = new java.awt.image.BufferedImage(8, 8, java.awt.image.BufferedImage.TYPE_INT_RGB);
+        Graphics2D g = img.createGraphics();
+        try {
+            g.setFont(awt(7f));
+            width(g, "0");
+        } finally {
+            g.dispose();
         }
     }
 

@@ -66,12 +66,18 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
         Map<String, EngineResult> results = new LinkedHashMap<>();
         Map<String, Map<String, LoadSetResult>> sols = new LinkedHashMap<>();
         if (det.classification() != Determinacy.Classification.UNSTABLE) {
-            for (Engine e : engines) {
-                EngineResult r = e.solve(em);
+            // the engines, and the load sets of each, are independent of one another (pure functions of the
+            // model): they run side by side on the machine's cores and are gathered back in their order, so
+            // every number is the same as in one thread
+            List<EngineResult> solved = engines.parallelStream().map(e -> e.solve(em)).toList();
+            for (int i = 0; i < engines.size(); i++) {
+                Engine e = engines.get(i);
+                EngineResult r = solved.get(i);
                 results.put(e.name(), r);
                 if (!r.stable()) continue;
+                List<LoadSetResult> rs = sets.parallelStream().map(s -> result(model, em, r, s, e.memberFunctions())).toList();
                 Map<String, LoadSetResult> byName = new LinkedHashMap<>();
-                for (LoadSet s : sets) byName.put(s.name(), result(model, em, r, s, e.memberFunctions()));
+                for (int k = 0; k < sets.size(); k++) byName.put(sets.get(k).name(), rs.get(k));
                 sols.put(e.name(), byName);
             }
         }

@@ -108,7 +108,9 @@ final class SparseForceMethod {
         for (int i = 0; i < m; i++) row.put(eq.equations().get(i).node() + "/" + eq.equations().get(i).direction(), i);
         Map<String, Solution> cases = new LinkedHashMap<>();
         Compatibility compat = new Compatibility(states, at, delta, flex);
-        for (LoadCase c : model.loadCases()) cases.put(c.name(), solveCase(c, row, compat));
+        // the load cases share the factorizations and nothing else: solved side by side, gathered in order
+        List<Solution> solved = model.loadCases().parallelStream().map(c -> solveCase(c, row, compat)).toList();
+        for (int k = 0; k < solved.size(); k++) cases.put(model.loadCases().get(k).name(), solved.get(k));
         List<String> notes = List.of("redundants: " + r + " self-stress states of the " + drawing.faces().size()
                         + " closed rings (sparse force method; the working is not listed at this size)",
                 "flexibility matrix: " + r + " x " + r + ", " + delta.storedEntries() + " stored entries (skyline, RCM order)");

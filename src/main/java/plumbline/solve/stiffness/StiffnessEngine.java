@@ -181,7 +181,9 @@ public final class StiffnessEngine implements Engine {
         }
         Map<String, Solution> cases = new LinkedHashMap<>();
         Factored kf = new Factored(model, nodes, index, dof, fixed, free, List.copyOf(elements), frameAngle, k, loading, functions);
-        for (LoadCase c : model.loadCases()) cases.put(c.name(), kf.solve(c));
+        // the load cases share the factorization and nothing else: solved side by side, gathered in order
+        List<Solution> solved = model.loadCases().parallelStream().map(kf::solve).toList();
+        for (int i = 0; i < solved.size(); i++) cases.put(model.loadCases().get(i).name(), solved.get(i));
         return new EngineResult(name(), true, null, cases, notes, warnings, false, null);
     }
 
