@@ -2,7 +2,6 @@ package plumbline.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -13,7 +12,6 @@ import plumbline.io.OutputBatch;
 import plumbline.io.OutputFiles;
 import plumbline.model.InputException;
 import plumbline.model.Problem;
-import plumbline.model.SourceRef;
 import plumbline.report.Console;
 import plumbline.report.Figures;
 import plumbline.report.PdfReport;

@@ -129,12 +129,7 @@ public final class Diagrams {
         Ink.Frame f = Ink.Frame.fit(m, w, h, margin);
         boolean labelled = m.members().size() <= Sketch.LABEL_LIMIT;
         Ink.Labels labels = new Ink.Labels(g, w, h);
-        g.setColor(Ink.GHOST);
-        g.setStroke(new BasicStroke(1.0f));
-        for (Member mem : m.members().values()) {
-            Node a = m.node(mem.from()), b = m.node(mem.to());
-            g.draw(new Line2D.Double(f.x(a.xM()), f.y(a.yM()), f.x(b.xM()), f.y(b.yM())));
-        }
+        Ink.members(g, m, f, Ink.GHOST, 1.0f);
         if (kind == Kind.DEFLECTION && !r.patterned()) {
             note = deflected(g, m, r.representative(), f, margin * 0.7, labels);
         } else {

@@ -10,6 +10,7 @@ import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.List;
+import plumbline.model.Member;
 import plumbline.model.Model;
 import plumbline.model.Node;
 
@@ -69,6 +70,16 @@ final class Ink {
         g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE); // curves drawn where they are, not snapped to pixels
         g.setFont(Typeface.awt(LABEL_PT));
         g.setColor(INK);
+    }
+
+    /** Every member as a straight line from its start node to its end node, in the given colour and width. */
+    static void members(Graphics2D g, Model m, Frame f, Color color, float width) {
+        g.setColor(color);
+        g.setStroke(new BasicStroke(width));
+        for (Member mem : m.members().values()) {
+            Node a = m.node(mem.from()), b = m.node(mem.to());
+            g.draw(new Line2D.Double(f.x(a.xM()), f.y(a.yM()), f.x(b.xM()), f.y(b.yM())));
+        }
     }
 
     /** Fills a shape with thin lines at 45 degrees, {@code gapPt} apart, then outlines it. */

@@ -32,7 +32,6 @@ import plumbline.review.LoadSetResult;
 import plumbline.review.Review;
 import plumbline.solve.EngineResult;
 import plumbline.solve.Equilibrium;
-import plumbline.solve.MemberSolution;
 import plumbline.solve.Solution;
 import plumbline.statics.ClaimedEquilibrium;
 import plumbline.statics.Determinacy;

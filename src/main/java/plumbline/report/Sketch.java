@@ -54,12 +54,7 @@ public final class Sketch {
         double dims = labelled ? 44 : 0;
         Ink.Frame f = Ink.Frame.fit(m, w, h, sym * 3 + dims, sym * 3, sym * 3.4, sym * 2.4 + dims);
         Ink.Labels labels = new Ink.Labels(g, w, h);
-        g.setColor(Ink.INK);
-        g.setStroke(new BasicStroke(1.8f));
-        for (Member mem : m.members().values()) {
-            Node a = m.node(mem.from()), b = m.node(mem.to());
-            g.draw(new Line2D.Double(f.x(a.xM()), f.y(a.yM()), f.x(b.xM()), f.y(b.yM())));
-        }
+        Ink.members(g, m, f, Ink.INK, 1.8f);
         for (Member mem : m.members().values()) hinges(g, m, f, mem, sym);
         for (Support s : m.supports().values()) {
             Node n = m.node(s.node());
@@ -363,12 +358,7 @@ public final class Sketch {
         Ink.prepare(g);
         double margin = Math.min(w, h) * 0.16;
         Ink.Frame f = Ink.Frame.fit(m, w, h, margin);
-        g.setColor(Ink.GHOST);
-        g.setStroke(new BasicStroke(1.5f));
-        for (Member mem : m.members().values()) {
-            Node a = m.node(mem.from()), b = m.node(mem.to());
-            g.draw(new Line2D.Double(f.x(a.xM()), f.y(a.yM()), f.x(b.xM()), f.y(b.yM())));
-        }
+        Ink.members(g, m, f, Ink.GHOST, 1.5f);
         double sym = symbol(w, h);
         for (Support s : m.supports().values()) support(g, f, m.node(s.node()), s, sym);
         double shift = margin * 0.7;

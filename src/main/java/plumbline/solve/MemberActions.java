@@ -11,7 +11,6 @@ import plumbline.model.Material;
 import plumbline.model.Member;
 import plumbline.model.MemberLoad;
 import plumbline.model.Model;
-import plumbline.model.Node;
 import plumbline.model.Section;
 import plumbline.model.Temperature;
 

@@ -18,7 +18,6 @@ import plumbline.model.NodeLoad;
 import plumbline.model.Problem;
 import plumbline.model.Section;
 import plumbline.model.SourceRef;
-import plumbline.model.Support;
 import plumbline.model.Temperature;
 
 /**

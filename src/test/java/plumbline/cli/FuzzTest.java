@@ -109,19 +109,7 @@ class FuzzTest {
                 Path file = dir.resolve("mutant-" + k + (rnd.nextInt(10) == 0 ? ".json" : ".yaml"));
                 Files.writeString(file, mutant, StandardCharsets.UTF_8);
                 Path json = dir.resolve("out-" + k + ".json");
-                Future<CliRunner> run = pool.submit(() -> CliRunner.run("check", file.toString(), "--json", json.toString()));
-                CliRunner r;
-                try {
-                    r = run.get(20, TimeUnit.SECONDS);
-                } catch (java.util.concurrent.TimeoutException e) {
-                    run.cancel(true);
-                    save(k, mutant);
-                    throw new AssertionError("mutant " + k + " of " + seed + " did not finish in 20 s");
-                }
-                boolean clean = (r.code() == 0 || r.code() == 1 || r.code() == 2) && !r.err().contains("Exception")
-                        && !r.err().contains("\tat ") && !r.out().contains("NaN") && !r.out().contains("Infinity");
-                if (!clean) save(k, mutant);
-                assertTrue(clean, "mutant " + k + " of " + seed + " gave exit " + r.code() + ":\n" + r.err() + r.out());
+                CliRunner r = runClean(pool, k, seed.toString(), mutant, "check", file.toString(), "--json", json.toString());
                 if (r.code() == 2) {
                     inputErrors++;
                     assertTrue(!Files.exists(json), "no output on an input error");
@@ -162,20 +150,8 @@ class FuzzTest {
                 Path claims = tempDir.resolve("claims-" + k + (seed[1].endsWith(".csv") ? ".csv" : ".yaml"));
                 Files.writeString(claims, mutant, StandardCharsets.UTF_8);
                 Path json = tempDir.resolve("claims-out-" + k + ".json");
-                Future<CliRunner> run = pool.submit(() -> CliRunner.run("check", seed[0], "--claims", claims.toString(),
-                        "--json", json.toString()));
-                CliRunner r;
-                try {
-                    r = run.get(20, TimeUnit.SECONDS);
-                } catch (java.util.concurrent.TimeoutException e) {
-                    run.cancel(true);
-                    save(k, mutant);
-                    throw new AssertionError("claims mutant " + k + " of " + seed[1] + " did not finish in 20 s");
-                }
-                boolean clean = (r.code() == 0 || r.code() == 1 || r.code() == 2) && !r.err().contains("Exception")
-                        && !r.err().contains("\tat ") && !r.out().contains("NaN") && !r.out().contains("Infinity");
-                if (!clean) save(k, mutant);
-                assertTrue(clean, "claims mutant " + k + " of " + seed[1] + " gave exit " + r.code() + ":\n" + r.err() + r.out());
+                CliRunner r = runClean(pool, k, seed[1], mutant, "check", seed[0], "--claims", claims.toString(),
+                        "--json", json.toString());
                 if (r.code() == 2) {
                     inputErrors++;
                     assertTrue(!Files.exists(json), "no output on an input error");
@@ -215,6 +191,27 @@ class FuzzTest {
             }
         }
         return String.join("\n", lines);
+    }
+
+    /**
+     * Runs one mutant within 20 s and requires a clean end: exit 0, 1 or 2, no stack trace, no
+     * NaN or Infinity printed. A mutant that fails is saved for a regression case.
+     */
+    static CliRunner runClean(ExecutorService pool, int k, String seed, String mutant, String... args) throws Exception {
+        Future<CliRunner> run = pool.submit(() -> CliRunner.run(args));
+        CliRunner r;
+        try {
+            r = run.get(20, TimeUnit.SECONDS);
+        } catch (java.util.concurrent.TimeoutException e) {
+            run.cancel(true);
+            save(k, mutant);
+            throw new AssertionError("mutant " + k + " of " + seed + " did not finish in 20 s");
+        }
+        boolean clean = (r.code() == 0 || r.code() == 1 || r.code() == 2) && !r.err().contains("Exception")
+                && !r.err().contains("\tat ") && !r.out().contains("NaN") && !r.out().contains("Infinity");
+        if (!clean) save(k, mutant);
+        assertTrue(clean, "mutant " + k + " of " + seed + " gave exit " + r.code() + ":\n" + r.err() + r.out());
+        return r;
     }
 
     private static void save(int k, String mutant) throws java.io.IOException {

@@ -17,7 +17,6 @@ import java.nio.file.Path;
 import java.util.Set;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import plumbline.report.Console;
 
 /**
  * The outputs of check read back as a checker would: the JSON validates against the shipped
