@@ -255,6 +255,8 @@ public final class Diagrams {
             double sx = f.x(px) + ey * v * k, sy = f.y(py) + ex * v * k;
             double ox = ey * Math.signum(v * k), oy = ex * Math.signum(v * k); // outwards from the member
             String text = Console.fmt(Shown.value(m.units(), v, kind.dimension));
+            if (labels.near(text, sx, sy, 14)) continue; // the same value at a joint, already labelled for the other member
+            labels.remember(text, sx, sy);
             labels.place(text, Ink.Labels.at(sx + ox * 2, sy + oy * 2, Math.abs(ox) > 0.3 ? Math.signum(ox) : 0, Math.abs(oy) > 0.3 ? Math.signum(oy) : 0),
                     Ink.Labels.at(sx + 2, sy, 1, oy >= 0 ? 1 : -1), Ink.Labels.at(sx - 2, sy, -1, oy >= 0 ? 1 : -1),
                     Ink.Labels.at(sx, sy - 6, 0, -1), Ink.Labels.at(sx, sy + 6, 0, 1));

@@ -122,6 +122,23 @@ final class Ink {
         private final Graphics2D g;
         private final Rectangle2D picture;
         private final List<Rectangle2D> taken = new ArrayList<>();
+        private final List<Object[]> values = new ArrayList<>(); // {text, x, y} of the values set with at()
+
+        /**
+         * True when the same text was already set for a point within {@code distance} points
+         * (the end moment of two members meeting at a joint, labelled once).
+         */
+        boolean near(String text, double x, double y, double distance) {
+            for (Object[] v : values) {
+                if (v[0].equals(text) && Math.hypot((double) v[1] - x, (double) v[2] - y) <= distance) return true;
+            }
+            return false;
+        }
+
+        /** Remembers that text was set for the point (x, y). */
+        void remember(String text, double x, double y) {
+            values.add(new Object[]{text, x, y});
+        }
 
         Labels(Graphics2D g, double w, double h) {
             this.g = g;
