@@ -4,6 +4,7 @@ import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
 import java.time.LocalDate;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
@@ -66,6 +67,7 @@ final class BenchCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "%s models; times in seconds (best of %d); peak heap in MiB%n", kind, repeat);
         out.printf(Locale.ROOT, "%8s %7s %7s %7s %7s %10s %7s %7s %7s%n", "members", "read", "statics", "stiff", "force", "check+json",
                 "pdf", "heap", "pdfheap");
+        List<double[]> rows = new ArrayList<>(); // {members, read, statics, stiff, force, check+json, pdf}
         for (int n : sizes) {
             String text = model(kind, n);
             double[] best = {1e9, 1e9, 1e9, 1e9, 1e9, 1e9};
@@ -107,13 +109,38 @@ final class BenchCommand implements Callable<Integer> {
                 for (int k = 0; k < 6; k++) best[k] = Math.min(best[k], Double.isNaN(t[k]) ? 1e9 : t[k]);
                 pdfHeap = Math.max(pdfHeap, peakHeap());
             }
+            rows.add(new double[]{members, best[0], best[1], best[2], best[3], best[4], best[5]});
             out.printf(Locale.ROOT, "%8d %7.3f %7.3f %7.3f %7s %10.3f %7.3f %7d %7d%n", members, best[0], best[1], best[2],
                     best[3] >= 1e9 ? "not run" : String.format(Locale.ROOT, "%.3f", best[3]), best[4], best[5], heap >> 20,
                     pdfHeap >> 20);
         }
+        if (rows.size() >= 2) out.println(growth(rows.get(0), rows.get(rows.size() - 1)));
         out.println("force: dense up to " + ForceEngine.DENSE_LIMIT + " node equations, then closed-ring self-stress states (sparse)");
         if (forceNote != null) out.println("force not run on some sizes: " + forceNote);
         return Main.OK;
+    }
+
+    /** Growth target of every stage from the smallest to the largest size (issue 17): time no worse than n^1.2. */
+    static final double GROWTH_TARGET = 1.2;
+
+    /**
+     * The growth exponent of each stage between two sizes, log(t2/t1) / log(n2/n1): 1 is
+     * linear. A stage that took under 20 ms at the smaller size is left out (timer noise).
+     */
+    static String growth(double[] small, double[] large) {
+        String[] stages = {"read", "statics", "stiff", "force", "check+json", "pdf"};
+        StringBuilder sb = new StringBuilder("growth exponent " + (int) small[0] + " -> " + (int) large[0] + " members (target <= "
+                + GROWTH_TARGET + "):");
+        for (int k = 0; k < stages.length; k++) {
+            double a = small[k + 1], b = large[k + 1];
+            if (a >= 1e9 || b >= 1e9 || a < 0.02 || large[0] <= small[0]) {
+                sb.append(' ').append(stages[k]).append(" -");
+                continue;
+            }
+            double e = Math.log(b / a) / Math.log(large[0] / small[0]);
+            sb.append(String.format(Locale.ROOT, " %s %.2f%s", stages[k], e, e > GROWTH_TARGET ? " (over)" : ""));
+        }
+        return sb.toString();
     }
 
     private static void resetPeaks() {
