@@ -104,7 +104,8 @@ final class Run {
                 Map<String, Object> tree = ResultsTree.of(r, new ResultsTree.Inputs(in.names(), in.sha256()), shown, agreement);
                 tree.put("notes", notes);
                 // large results are written compact: indentation would double a file of many megabytes
-                batch.add(json, OutputFiles.json(tree, in.model.members().size() <= COMPACT_JSON_ABOVE), "--json");
+                boolean indent = in.model.members().size() <= COMPACT_JSON_ABOVE;
+                batch.add(json, stream -> OutputFiles.json(tree, indent, stream), "--json");
             }
             if (pdf != null) {
                 batch.add(pdf, PdfReport.render(r, new ResultsTree.Inputs(in.names(), in.sha256()), agreement, notes,

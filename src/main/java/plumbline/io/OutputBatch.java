@@ -1,6 +1,8 @@
 package plumbline.io;
 
+import java.io.BufferedOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
@@ -41,7 +43,12 @@ public final class OutputBatch {
 
     private static final SecureRandom RANDOM = new SecureRandom();
 
-    private final Map<Path, byte[]> files = new LinkedHashMap<>();
+    /** What is written to one file: its bytes, or a writer that streams them (large results). */
+    public interface Content {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    private final Map<Path, Content> files = new LinkedHashMap<>();
     private final Mover mover;
 
     /** Renames a file over another; replaceable so tests can make a rename fail. */
@@ -131,12 +138,17 @@ public final class OutputBatch {
 
     /** Adds a file to the batch; the same target twice is refused (exit 2), as it would lose one of them. */
     public void add(Path target, byte[] bytes, String option) throws InputException {
+        add(target, out -> out.write(bytes), option);
+    }
+
+    /** Adds a file whose content is streamed when the batch is written. */
+    public void add(Path target, Content content, String option) throws InputException {
         Path norm = target.toAbsolutePath().normalize();
         if (Files.exists(norm) && !Files.isRegularFile(norm)) {
             throw new InputException(new Problem(SourceRef.none(target.toString()), option,
                     "is a folder or another non-file where an output must go; expected a file name (move it away)"));
         }
-        if (files.putIfAbsent(norm, bytes) != null) {
+        if (files.putIfAbsent(norm, content) != null) {
             throw new InputException(new Problem(SourceRef.none(target.toString()), option,
                     "would be written twice in one run (two outputs share this name); expected a different file name"));
         }
@@ -158,7 +170,9 @@ public final class OutputBatch {
             for (var e : files.entrySet()) {
                 Path tmp = Files.createFile(e.getKey().resolveSibling(partName(e.getKey().getFileName().toString(), false)));
                 written.put(e.getKey(), tmp);
-                Files.write(tmp, e.getValue());
+                try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16)) {
+                    e.getValue().writeTo(out);
+                }
             }
             for (var e : written.entrySet()) {
                 Path target = e.getKey();

@@ -5,6 +5,7 @@ import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -52,10 +53,21 @@ public final class OutputFiles {
 
     /** The tree as JSON text, indented for reading or compact (large results). */
     public static byte[] json(Map<String, Object> tree, boolean indent) throws IOException {
-        // the shortest decimal that reads back as the same double (Schubfach), written without Double.toString's detours
-        ObjectMapper m = new ObjectMapper(JsonFactory.builder().enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER).build());
+        return mapper(indent).writeValueAsBytes(tree);
+    }
+
+    /** Writes the tree as JSON text straight to a stream (a large result is never held whole in memory as text). */
+    public static void json(Map<String, Object> tree, boolean indent, OutputStream out) throws IOException {
+        mapper(indent).writeValue(out, tree);
+    }
+
+    private static ObjectMapper mapper(boolean indent) {
+        // the shortest decimal that reads back as the same double (Schubfach), written without Double.toString's detours;
+        // the stream is the caller's to close
+        ObjectMapper m = new ObjectMapper(JsonFactory.builder().enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
+                .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build());
         if (indent) m.enable(SerializationFeature.INDENT_OUTPUT);
-        return m.writeValueAsBytes(tree);
+        return m;
     }
 
     /** A JSON text parsed to plain maps and lists (for tests and the schema check). */
