@@ -35,6 +35,7 @@ import plumbline.solve.Equilibrium;
 import plumbline.solve.Solution;
 import plumbline.statics.ClaimedEquilibrium;
 import plumbline.statics.Determinacy;
+import plumbline.statics.EquilibriumMatrix;
 import plumbline.units.Dimension;
 import plumbline.units.UnitSystem;
 import static plumbline.report.PdfKit.Style.BODY;
@@ -576,9 +577,9 @@ public final class PdfReport {
         kit.doc.add(t2);
     }
 
-    /** True for a redundant that is a moment (a member end moment or a support's moment), from its label. */
+    /** True for a redundant that is a moment (a member end moment or a support's moment). */
     static boolean moment(String redundant) {
-        return redundant.endsWith(".M_start") || redundant.endsWith(".M_end") || redundant.endsWith(".Mz");
+        return EquilibriumMatrix.isMoment(redundant);
     }
 
     private void warnings() throws DocumentException {

@@ -28,6 +28,18 @@ public final class EquilibriumMatrix {
     /** What an unknown is. */
     public enum Kind { AXIAL, MOMENT_START, MOMENT_END, REACTION }
 
+    /** The endings of the labels of the unknowns that are moments: a member's end moments and a support's moment. */
+    private static final String[] MOMENT_LABELS = {".M_start", ".M_end", ".Mz"};
+
+    /**
+     * True when an unknown's label names a moment (its unit is a force times a length, and the
+     * displacement it works through a rotation), as the force method's working lists it.
+     */
+    public static boolean isMoment(String label) {
+        for (String end : MOMENT_LABELS) if (label.endsWith(end)) return true;
+        return false;
+    }
+
     /** One unknown: its kind, the member or node it belongs to, and for a reaction the direction (0 ux, 1 uy, 2 rz). */
     public record Unknown(Kind kind, String owner, int direction, String label) {
     }
@@ -94,10 +106,10 @@ public final class EquilibriumMatrix {
         List<Unknown> unk = new ArrayList<>();
         for (Member m : model.members().values()) {
             unk.add(new Unknown(Kind.AXIAL, m.name(), -1, m.name() + ".N"));
-            if (!m.releasedStart()) unk.add(new Unknown(Kind.MOMENT_START, m.name(), -1, m.name() + ".M_start"));
-            if (!m.releasedEnd()) unk.add(new Unknown(Kind.MOMENT_END, m.name(), -1, m.name() + ".M_end"));
+            if (!m.releasedStart()) unk.add(new Unknown(Kind.MOMENT_START, m.name(), -1, m.name() + MOMENT_LABELS[0]));
+            if (!m.releasedEnd()) unk.add(new Unknown(Kind.MOMENT_END, m.name(), -1, m.name() + MOMENT_LABELS[1]));
         }
-        String[] dirs = {"Fx", "Fy", "Mz"};
+        String[] dirs = {"Fx", "Fy", MOMENT_LABELS[2].substring(1)};
         for (Support s : model.supports().values()) {
             for (int d = 0; d < 3; d++) if (s.reacts(d)) unk.add(new Unknown(Kind.REACTION, s.node(), d, s.node() + "." + dirs[d]));
         }

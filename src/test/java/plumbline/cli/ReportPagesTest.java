@@ -203,6 +203,35 @@ class ReportPagesTest {
     }
 
     @Test
+    void theForceMethodWorkingIsInTheModelsUnits() throws Exception {
+        // propped cantilever in kN and mm, L = 6000 mm, EI = 200 GPa * 1e8 mm4 = 2e10 kN*mm2: delta = L^3 / 3EI
+        // = 2.16e11 / 6e10 = 3.6 mm/kN, Delta_0 = -wL^4 / 8EI = -0.01 * 1.296e15 / 1.6e11 = -81 mm, z = 81 / 3.6 = 22.5 kN
+        // (statics and beam tables by hand); in mm a slip between force and moment units would show (1 kN*mm is not 1 kN)
+        Path model = tempDir.resolve("propped.yaml");
+        Files.writeString(model, """
+                format: plumbline/1
+                units: {force: kN, length: mm}
+                materials: {steel: {E: 200 GPa}}
+                sections: {G: {A: 1.0e4, I: 1.0e8, material: steel}}
+                nodes: {A: [0, 0], B: [6000, 0]}
+                supports: {A: fixed, B: roller}
+                members: {M1: {from: A, to: B, section: G}}
+                loads: {W: {type: dead, member_loads: [{member: M1, w: -0.01}]}}
+                """);
+        String text = String.join("\n", pages(check(tempDir, model.toString()))).replaceAll("\\s+", " ");
+        assertTrue(text.contains("in mm/kN (force-force)") && text.contains("every entry x 10^0: delta_ij B.Fy B.Fy 3.600"), text);
+        assertTrue(text.contains("W -81.00 22.50"), text);
+    }
+
+    @Test
+    void aCharacterNoEmbeddedFontHoldsPrintsAsItsCodePoint() throws Exception {
+        Path model = tempDir.resolve("emoji.yaml");
+        Files.writeString(model, NON_LATIN.replace("Σ1", "S\uD83D\uDE001"));
+        String text = String.join("\n", pages(check(tempDir, model.toString()))).replaceAll("\\s+", " ");
+        assertTrue(text.contains("S[U+1F600]1"), "a character neither font holds prints as its code point: " + text);
+    }
+
+    @Test
     void loadSetsWhoseNamesDifferOnlyOutsideAsciiGetFiguresOfTheirOwn() throws Exception {
         Path model = tempDir.resolve("names.yaml");
         Files.writeString(model, NON_LATIN + "  Gж: {type: live, member_loads: [{member: 梁2, w: -5}]}\n"
