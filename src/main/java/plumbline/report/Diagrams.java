@@ -7,8 +7,10 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import plumbline.model.Member;
 import plumbline.model.Model;
 import plumbline.model.Node;
@@ -101,17 +103,30 @@ public final class Diagrams {
         return out;
     }
 
-    /** The largest magnitude of the kind over the set (for the envelope, over both curves). */
-    private static double peak(Model m, LoadSetResult r, Kind kind) {
+    /**
+     * Each member's curves, sampled once for drawing, the scale and the labels: one curve, or
+     * for an envelope the upper and the lower.
+     */
+    private static Map<String, List<List<double[]>>> curves(Model m, LoadSetResult r, Kind kind) {
+        Map<String, List<List<double[]>>> out = new HashMap<>();
+        for (Member mem : m.members().values()) {
+            List<List<double[]>> c = new ArrayList<>();
+            c.add(samples(m, mem, r, kind, true));
+            if (r.patterned()) c.add(samples(m, mem, r, kind, false));
+            out.put(mem.name(), c);
+        }
+        return out;
+    }
+
+    /** The largest magnitude of the kind over the set: exact peaks of one state, the samples of an envelope. */
+    private static double peak(Model m, LoadSetResult r, Kind kind, Map<String, List<List<double[]>>> curves) {
         double peak = 0;
         for (Member mem : m.members().values()) {
             if (!r.patterned()) {
                 Piecewise p = function(r.representative().members().get(mem.name()), kind);
                 peak = Math.max(peak, Math.max(Math.abs(p.max().value()), Math.abs(p.min().value())));
             } else {
-                for (boolean upper : new boolean[]{true, false}) {
-                    for (double[] s : samples(m, mem, r, kind, upper)) peak = Math.max(peak, Math.abs(s[1]));
-                }
+                for (List<double[]> c : curves.get(mem.name())) for (double[] s : c) peak = Math.max(peak, Math.abs(s[1]));
             }
         }
         return peak;
@@ -133,15 +148,15 @@ public final class Diagrams {
         if (kind == Kind.DEFLECTION && !r.patterned()) {
             note = deflected(g, m, r.representative(), f, margin * 0.7, labels);
         } else {
-            double peak = peak(m, r, kind);
+            Map<String, List<List<double[]>>> curves = curves(m, r, kind);
+            double peak = peak(m, r, kind, curves);
             // moment on the tension face (positive towards local -y); axial and shear force positive towards local +y
             // (a deflection envelope is drawn where the member goes: positive v towards local +y)
             double k = (peak == 0 ? 0 : margin * 0.7 / peak) * (kind == Kind.MOMENT ? 1 : -1);
             double largest = 0, largestX = 0;
             String largestOn = "";
             for (Member mem : m.members().values()) {
-                for (boolean upper : r.patterned() ? new boolean[]{true, false} : new boolean[]{true}) {
-                    List<double[]> pts = samples(m, mem, r, kind, upper);
+                for (List<double[]> pts : curves.get(mem.name())) {
                     for (double[] p : pts) {
                         if (Math.abs(p[1]) > largest * (1 + 1e-9)) {
                             largest = Math.abs(p[1]);
@@ -155,7 +170,7 @@ public final class Diagrams {
                     }
                     shape(g, m, f, mem, pts, k, labelled);
                 }
-                if (labelled) peakLabels(g, m, f, mem, r, kind, k, labels);
+                if (labelled) peakLabels(g, m, f, mem, r, kind, k, labels, curves.get(mem.name()));
             }
             if (kind == Kind.DEFLECTION && largest > 0) {
                 // the envelope of the transverse deflection: its drawing scale and its largest value, where
@@ -228,15 +243,15 @@ public final class Diagrams {
 
     /** A member's largest and smallest values (exact peaks; for an envelope, of the upper and lower curves). */
     private static void peakLabels(Graphics2D g, Model m, Ink.Frame f, Member mem, LoadSetResult r, Kind kind, double k,
-                                   Ink.Labels labels) {
+                                   Ink.Labels labels, List<List<double[]>> curves) {
         double[][] ext; // {x, value}
         if (!r.patterned()) {
             Piecewise p = function(r.representative().members().get(mem.name()), kind);
             ext = new double[][]{{p.max().xM(), p.max().value()}, {p.min().xM(), p.min().value()}};
         } else if (kind == Kind.DEFLECTION) {
             double[] hi = {0, Double.NEGATIVE_INFINITY}, lo = {0, Double.POSITIVE_INFINITY};
-            for (double[] s : samples(m, mem, r, kind, true)) if (s[1] > hi[1]) hi = s;
-            for (double[] s : samples(m, mem, r, kind, false)) if (s[1] < lo[1]) lo = s;
+            for (double[] s : curves.get(0)) if (s[1] > hi[1]) hi = s;
+            for (double[] s : curves.get(1)) if (s[1] < lo[1]) lo = s;
             ext = new double[][]{hi, lo};
         } else {
             Quantity max = quantity(kind, Quantity.Extreme.MAX), min = quantity(kind, Quantity.Extreme.MIN);
