@@ -2,8 +2,10 @@ package plumbline.io;
 
 import java.io.IOException;
 import java.nio.ByteBuffer;
+import java.nio.CharBuffer;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.Charset;
+import java.nio.charset.CoderResult;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -139,16 +141,12 @@ public final class ModelReader {
         return false;
     }
 
-    /** The index of the first byte that does not continue a valid UTF-8 sequence. */
+    /** The index of the first byte that is not valid UTF-8, where the JDK's decoder stops. */
     private static int firstBadUtf8(byte[] b) {
-        int i = 0;
-        while (i < b.length) {
-            int c = b[i] & 0xFF, n = c < 0x80 ? 0 : c >= 0xC2 && c < 0xE0 ? 1 : c >= 0xE0 && c < 0xF0 ? 2 : c >= 0xF0 && c < 0xF5 ? 3 : -1;
-            if (n < 0 || i + n >= b.length && n > 0) return i;
-            for (int k = 1; k <= n; k++) if ((b[i + k] & 0xC0) != 0x80) return i;
-            i += n + 1;
-        }
-        return Math.max(0, b.length - 1);
+        ByteBuffer in = ByteBuffer.wrap(b);
+        CoderResult r = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT).decode(in, CharBuffer.allocate(b.length), true);
+        return r.isError() ? in.position() : Math.max(0, b.length - 1);
     }
 
     public static Model read(String file, String text, boolean yaml) throws InputException {

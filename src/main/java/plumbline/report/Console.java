@@ -106,7 +106,7 @@ public final class Console {
                         fmt(u.fromInternal(c.computed(), cl.dimension())), unit,
                         c.status() == ClaimResult.Status.OK && c.relativeDifference() > c.tolerance().relative()
                                 ? "under the absolute floor" : pct(c.relativeDifference()),
-                        pct(c.tolerance().relative()));
+                        Shown.tolerancePercent(c.tolerance().relative()));
                 String written = asWritten(cl, u);
                 sb.append(wrap(line + (written.isEmpty() ? "" : " [" + written + "]"), "         "));
                 if (c.explanation() > 0) {

@@ -285,7 +285,7 @@ public final class PdfReport {
     private void equilibrium(Model m) throws DocumentException {
         UnitSystem u = m.units();
         kit.caption("Equilibrium of the claimed reactions (sums of the claimed reactions and the applied loads; moments about "
-                + "the first support; flagged beyond " + Console.pct(ClaimedEquilibrium.DEFAULT_TOLERANCE)
+                + "the first support; flagged beyond " + Shown.tolerancePercent(ClaimedEquilibrium.DEFAULT_TOLERANCE)
                 + " of the applied load, common practice):");
         if (review.equilibrium().isEmpty()) {
             kit.para("No reactions are claimed.", BODY);

@@ -113,10 +113,20 @@ final class Shown {
         return String.format(Locale.ROOT, rel < 0.01 ? "%.2f%%" : "%.1f%%", rel * 100);
     }
 
+    /**
+     * A tolerance as written, to four significant figures without trailing zeros ("3%",
+     * "0.0001%"): unlike a difference it is never rounded into "<0.01%".
+     */
+    static String tolerancePercent(double rel) {
+        String v = Console.fmt(rel * 100);
+        if (v.contains(".") && !v.contains("e")) v = v.replaceAll("0+$", "").replaceAll("\\.$", "");
+        return v + "%";
+    }
+
     /** The tolerance a claim was judged by: its relative tolerance, or the absolute floor where that governs. */
     static String tolerance(UnitSystem u, ClaimResult c) {
         if (byFloor(c)) return "\u00b1" + withUnit(u, c.absoluteFloor(), c.claim().dimension()) + " (floor)";
-        return percent(c.tolerance().relative()).replace(".0%", "%");
+        return tolerancePercent(c.tolerance().relative());
     }
 
     /** A residual sum of equilibrium: 0 where it is rounding (under 1e-9 of the applied load), else its value. */

@@ -45,6 +45,14 @@ class NumbersTest {
     }
 
     @Test
+    void tolerancesPrintAsWrittenNeverRoundedAway() {
+        assertEquals("3%", Shown.tolerancePercent(0.03));
+        assertEquals("0.5%", Shown.tolerancePercent(0.005));
+        assertEquals("0.0001%", Shown.tolerancePercent(1e-6)); // the check cases' 0.0001 %, not "<0.01%"
+        assertEquals("12.5%", Shown.tolerancePercent(0.125));
+    }
+
+    @Test
     void spanRatios() {
         // 5 m / 9.881 mm = 506.0 (by hand)
         assertEquals("L/506", Shown.spanRatio(0.009881, 5.0));
