@@ -99,9 +99,14 @@ final class Shown {
     static String difference(UnitSystem u, ClaimResult c) {
         if (byFloor(c)) {
             double diff = Math.abs(c.claim().valueInternal() - denoised(c.computed(), c.absoluteFloor()));
-            return withUnit(u, diff, c.claim().dimension());
+            return withUnit(u, denoised(diff, c.absoluteFloor()), c.claim().dimension()); // rounding shows as 0
         }
-        return percent(c.relativeDifference());
+        double rel = c.relativeDifference(), tol = c.tolerance().relative();
+        if (rel < 1e-4 && tol < 1e-4) {
+            // a tolerance finer than the column's 0.01%: say where the difference lies against it
+            return rel <= tol ? "<" + tolerancePercent(tol) : String.format(Locale.ROOT, "%.2g%%", rel * 100);
+        }
+        return percent(rel);
     }
 
     /** A relative difference as a percentage that fits a narrow column. */

@@ -278,6 +278,13 @@ class ReportPagesTest {
         assertFalse(e.find(), () -> "e-notation: " + numbers.substring(Math.max(0, e.start() - 60), e.end() + 20));
         assertFalse(Pattern.compile("(?<![\\w.])-0(\\.0+)?(?![\\d.])").matcher(text).find(), "no -0");
         assertTrue(text.contains("reaction L0 Fx 0 kN 0 kN 0 kN 0 kN ±"), "a claimed zero against rounding: " + text);
+        // a tolerance of 0.0001% (the check case's own): the floor governs and the rounding difference prints as 0
+        Path other = Files.createDirectories(tempDir.resolve("fine"));
+        String fine = String.join("\n", pages(check(other, "checks/20-two-span-pattern-live.yaml"))).replaceAll("\\s+", " ");
+        assertFalse(Pattern.compile("\\d\\.?\\d*e[-+]?\\d").matcher(fine.replaceAll("\\b[0-9a-f]{64}\\b", "")
+                .replaceAll("residual at most [0-9.e+-]+ of the load \\(limit [0-9.e+-]+\\)", "")
+                .replaceAll("agree to [0-9.e+-]+ \\(limit [0-9.e+-]+\\)", "")).find(), fine);
+        assertTrue(fine.contains("reaction A Fy 26.25 kN 26.25 kN 26.25 kN 0 kN"), fine);
         assertFalse(text.contains("100.0%"), "no 100% for a claimed zero");
     }
 
