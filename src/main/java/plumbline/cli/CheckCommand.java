@@ -3,6 +3,7 @@ package plumbline.cli;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import plumbline.run.Method;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;

@@ -2,6 +2,7 @@ package plumbline.cli;
 
 import java.nio.file.Path;
 import java.util.List;
+import plumbline.run.Method;
 
 /**
  * Everything a {@code check} or {@code solve} run is asked to do, as one record: the model

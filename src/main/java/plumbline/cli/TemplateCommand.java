@@ -40,7 +40,7 @@ final class TemplateCommand implements Callable<Integer> {
         var out = spec.commandLine().getOut();
         Model m;
         try {
-            m = Inputs.load(model, List.of()).model;
+            m = Run.load(model, List.of()).model();
         } catch (InputException e) {
             return Run.inputProblems(e, spec.commandLine().getErr());
         }

@@ -33,8 +33,12 @@ public final class ClaimsReader {
 
     /** Reads a separate claims file for {@code model}. */
     public static ClaimSet read(Path path, Model model) throws InputException {
-        String name = path.toString();
-        String text = ModelReader.readText(path);
+        return read(path.toString(), ModelReader.readBytes(path), model);
+    }
+
+    /** A claims file given as its name and bytes; the name's ending tells CSV, YAML or JSON. */
+    public static ClaimSet read(String name, byte[] bytes, Model model) throws InputException {
+        String text = ModelReader.decode(name, bytes);
         List<Problem> problems = new ArrayList<>();
         ClaimSet cs;
         if (name.toLowerCase(Locale.ROOT).endsWith(".csv")) {

@@ -69,6 +69,17 @@ public final class ModelReader {
     }
 
     static String readText(Path path) throws InputException {
+        return decode(path.toString(), readBytes(path));
+    }
+
+    /** A model given as a file's name and bytes (as the workbench holds it); the name tells YAML from JSON. */
+    public static Model read(String name, byte[] bytes) throws InputException {
+        boolean yaml = isYaml(name);
+        return read(name, decode(name, bytes), yaml);
+    }
+
+    /** The bytes of an input file, refused with a message when it is missing or larger than is read. */
+    public static byte[] readBytes(Path path) throws InputException {
         String name = path.toString();
         try {
             if (!Files.isRegularFile(path)) {
@@ -78,7 +89,7 @@ public final class ModelReader {
                 throw new InputException(new Problem(SourceRef.none(name), "(file)",
                         "file is " + Files.size(path) + " bytes; at most " + TreeReader.MAX_CHARS + " are read"));
             }
-            return decode(name, Files.readAllBytes(path));
+            return Files.readAllBytes(path);
         } catch (IOException e) {
             throw new InputException(new Problem(SourceRef.none(name), "(file)", "cannot read: " + e.getMessage()));
         }

@@ -34,8 +34,11 @@ class ArchitectureTest {
             Map.entry("review", Set.of("solve", "statics", "validate", "model", "units")),
             Map.entry("report", Set.of("review", "solve", "statics", "validate", "io", "model", "units")),
             Map.entry("bench", Set.of()),
-            Map.entry("cli", Set.of("report", "review", "solve", "solve.stiffness", "solve.force", "statics", "validate", "io",
-                    "model", "units", "linalg", "bench")));
+            Map.entry("run", Set.of("report", "review", "solve", "solve.stiffness", "solve.force", "statics", "validate", "io",
+                    "model", "units")),
+            Map.entry("serve", Set.of("run", "report", "review", "solve", "statics", "validate", "io", "model", "units")),
+            Map.entry("cli", Set.of("serve", "run", "report", "review", "solve", "solve.stiffness", "solve.force", "statics",
+                    "validate", "io", "model", "units", "linalg", "bench")));
 
     static final Map<String, String> LIBRARIES = Map.of("com.fasterxml.jackson", "io", "com.lowagie", "report", "picocli", "cli");
 

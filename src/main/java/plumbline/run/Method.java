@@ -1,6 +1,6 @@
-package plumbline.cli;
+package plumbline.run;
 
 /** Which engines fill the results: the stiffness method, the force method, or both (their agreement then reported). */
-enum Method {
+public enum Method {
     stiffness, force, both
 }

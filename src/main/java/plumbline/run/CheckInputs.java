@@ -1,8 +1,5 @@
-package plumbline.cli;
+package plumbline.run;
 
-import java.io.IOException;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
@@ -24,19 +21,29 @@ import plumbline.statics.EquilibriumMatrix;
 import plumbline.validate.ClaimCheck;
 import plumbline.validate.StructureCheck;
 
-/** Reads and validates the model and claims files of one run; all problems at once. */
-final class Inputs {
+/** The model and claims files of one run, read and validated; every problem at once. */
+public final class CheckInputs {
 
-    final Model model;
-    final List<Path> files;
+    private final Model model;
+    private final List<Source> sources;
 
-    private Inputs(Model model, List<Path> files) {
+    private CheckInputs(Model model, List<Source> sources) {
         this.model = model;
-        this.files = files;
+        this.sources = List.copyOf(sources);
     }
 
-    static Inputs load(Path modelFile, List<Path> claimFiles) throws InputException {
-        Model m = ModelReader.read(modelFile);
+    /** The validated model with every claims file's claims. */
+    public Model model() {
+        return model;
+    }
+
+    /**
+     * Reads and validates a model and its claims files.
+     *
+     * @throws InputException with every problem found, each naming file, line and field
+     */
+    public static CheckInputs of(Source modelFile, List<Source> claimFiles) throws InputException {
+        Model m = ModelReader.read(modelFile.name(), modelFile.bytes());
         List<Problem> problems = new ArrayList<>(StructureCheck.check(m));
         if (!problems.isEmpty()) throw new InputException(problems);
         if (!m.redundants().isEmpty()) {
@@ -51,9 +58,9 @@ final class Inputs {
             if (!problems.isEmpty()) throw new InputException(problems);
         }
         List<ClaimSet> sets = new ArrayList<>();
-        for (Path p : claimFiles) {
+        for (Source c : claimFiles) {
             try {
-                sets.add(ClaimsReader.read(p, m));
+                sets.add(ClaimsReader.read(c.name(), c.bytes(), m));
             } catch (InputException e) {
                 problems.addAll(e.problems());
             }
@@ -66,24 +73,25 @@ final class Inputs {
         for (LoadSet s : Analysis.loadSets(m)) if (s.combination()) states.add(s.limitState());
         problems.addAll(ClaimCheck.check(m, names, states));
         if (!problems.isEmpty()) throw new InputException(problems);
-        List<Path> files = new ArrayList<>();
-        files.add(modelFile);
-        files.addAll(claimFiles);
-        return new Inputs(m, files);
+        List<Source> all = new ArrayList<>();
+        all.add(modelFile);
+        all.addAll(claimFiles);
+        return new CheckInputs(m, all);
     }
 
-    List<String> names() {
-        return files.stream().map(Path::toString).toList();
+    /** The input files' names, model first, as the results and the report record them. */
+    public List<String> names() {
+        return sources.stream().map(Source::name).toList();
     }
 
-    List<String> sha256() {
+    /** The SHA-256 of each input file's bytes, in the order of {@link #names()}. */
+    public List<String> sha256() {
         List<String> out = new ArrayList<>();
-        for (Path p : files) {
+        for (Source s : sources) {
             try {
-                MessageDigest d = MessageDigest.getInstance("SHA-256");
-                out.add(HexFormat.of().formatHex(d.digest(Files.readAllBytes(p))));
-            } catch (IOException | NoSuchAlgorithmException e) {
-                out.add("unreadable");
+                out.add(HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(s.bytes())));
+            } catch (NoSuchAlgorithmException e) {
+                throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
             }
         }
         return out;
