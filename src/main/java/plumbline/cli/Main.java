@@ -11,7 +11,7 @@ import plumbline.report.ResultsTree;
  */
 @Command(name = "plumbline", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Independent check of plane frame, beam and truss models and of the results claimed for them.",
-        subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, UnitsCommand.class, SchemaCommand.class, BenchCommand.class,
+        subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, ServeCommand.class, UnitsCommand.class, SchemaCommand.class, BenchCommand.class,
                 CommandLine.HelpCommand.class})
 public final class Main implements Runnable {
 

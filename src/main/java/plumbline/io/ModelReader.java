@@ -102,7 +102,7 @@ public final class ModelReader {
      * with the line they are on, rather than read as replacement characters: a name that
      * silently changed would no longer match the calc package.
      */
-    static String decode(String name, byte[] bytes) throws InputException {
+    public static String decode(String name, byte[] bytes) throws InputException {
         Charset cs = StandardCharsets.UTF_8;
         int skip = 0;
         if (bytes.length >= 2 && (bytes[0] & 0xFF) == 0xFE && (bytes[1] & 0xFF) == 0xFF) {

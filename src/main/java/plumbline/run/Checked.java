@@ -93,6 +93,23 @@ public final class Checked {
         return new Checked(in, a, r, notes);
     }
 
+    /**
+     * Reads a tolerance written as "5%" or "0.05" as the fraction 0.05.
+     *
+     * @throws IllegalArgumentException saying what was expected
+     */
+    public static double toleranceRatio(String written) {
+        String v = written.trim();
+        double d;
+        try {
+            d = v.endsWith("%") ? Double.parseDouble(v.substring(0, v.length() - 1).trim()) / 100 : Double.parseDouble(v);
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("'" + written + "' is not a tolerance; expected e.g. 5% or 0.05");
+        }
+        if (!(d >= 0 && d < 1)) throw new IllegalArgumentException("'" + written + "' is out of range; expected 0% to 100%");
+        return d;
+    }
+
     public Review review() {
         return review;
     }
