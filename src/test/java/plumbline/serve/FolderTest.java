@@ -1,0 +1,75 @@
+package plumbline.serve;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** File access stays inside the folder the workbench was started in (common practice: no traversal, no links out). */
+class FolderTest {
+
+    @TempDir
+    Path tmp;
+
+    Folder folder() throws Exception {
+        Path root = Files.createDirectories(tmp.resolve("calc"));
+        Files.writeString(root.resolve("beam.yaml"), "format: plumbline/1\n");
+        Files.createDirectories(root.resolve("sub"));
+        Files.writeString(root.resolve("sub/claims.csv"), "item,combo,name,quantity,value\n");
+        Files.writeString(root.resolve("notes.txt"), "not a model");
+        Files.writeString(tmp.resolve("outside.yaml"), "secret: 1\n");
+        return new Folder(root);
+    }
+
+    @Test
+    void namesThatLeadOutsideAreRefused() throws Exception {
+        Folder f = folder();
+        for (String name : new String[]{"../outside.yaml", "sub/../../outside.yaml", "/etc/passwd.yaml", tmp.resolve("outside.yaml").toString(),
+                "./beam.yaml", "sub//claims.csv", ".hidden.yaml", "C:\\x.yaml", "a\0.yaml"}) {
+            Folder.Refused e = assertThrows(Folder.Refused.class, () -> f.read(name), name);
+            assertTrue(e.status == 403 || e.status == 400, name + ": " + e.status);
+        }
+        assertEquals(400, assertThrows(Folder.Refused.class, () -> f.read("notes.txt")).status);
+        assertEquals(404, assertThrows(Folder.Refused.class, () -> f.read("missing.yaml")).status);
+    }
+
+    @Test
+    void aLinkPointingOutIsRefused() throws Exception {
+        Folder f = folder();
+        Files.createSymbolicLink(f.root().resolve("link.yaml"), tmp.resolve("outside.yaml"));
+        Files.createSymbolicLink(f.root().resolve("out"), tmp);
+        assertEquals(403, assertThrows(Folder.Refused.class, () -> f.read("link.yaml")).status);
+        assertEquals(403, assertThrows(Folder.Refused.class, () -> f.read("out/outside.yaml")).status);
+        assertEquals(403, assertThrows(Folder.Refused.class, () -> f.write("out/new.yaml", new byte[]{1}, true)).status);
+        assertFalse(Files.exists(tmp.resolve("new.yaml")));
+        assertTrue(f.list().stream().noneMatch(e -> e.name().contains("outside")), "listing follows no link out: " + f.list());
+    }
+
+    @Test
+    void listsOnlyModelAndClaimsFiles() throws Exception {
+        assertEquals("[beam.yaml, sub/claims.csv]", folder().list().stream().map(Folder.Entry::name).toList().toString());
+    }
+
+    @Test
+    void savesWholeAndReplacesOnlyWhenAsked() throws Exception {
+        Folder f = folder();
+        byte[] text = "format: plumbline/1\n# edited\n".getBytes(StandardCharsets.UTF_8);
+        assertEquals(409, assertThrows(Folder.Refused.class, () -> f.write("beam.yaml", text, false)).status);
+        assertEquals("format: plumbline/1\n", Files.readString(f.root().resolve("beam.yaml")));
+        f.write("beam.yaml", text, true);
+        assertArrayEquals(text, f.read("beam.yaml"));
+        f.write("sub/new-claims.csv", text, false);
+        assertArrayEquals(text, Files.readAllBytes(f.root().resolve("sub/new-claims.csv")));
+        assertEquals(404, assertThrows(Folder.Refused.class, () -> f.write("nofolder/x.yaml", text, false)).status);
+        try (var s = Files.list(f.root())) {
+            assertTrue(s.noneMatch(p -> p.getFileName().toString().contains(".part")), "no working file left behind");
+        }
+    }
+}
