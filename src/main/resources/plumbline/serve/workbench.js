@@ -192,7 +192,15 @@ function setText(t, note) {
 function replaceValue(node, value) {
   const t = text.value;
   const start = offsetOf(t, node.line, node.col);
-  setText(t.slice(0, start) + yamlValue(value) + t.slice(valueEnd(t, start)));
+  const end = valueEnd(t, start);
+  // the table was drawn from the text as it was read; if the text has changed there since, edit nothing
+  const written = t.slice(start, end).replace(/^(['"])([\s\S]*)\1$/, '$2');
+  if (node.text !== undefined && written !== node.text && written.replace(/''/g, "'") !== node.text) {
+    say('The text changed under this table; nothing was edited. Try again.', true);
+    validate();
+    return;
+  }
+  setText(t.slice(0, start) + yamlValue(value) + t.slice(end));
 }
 
 // Adds `key: value` to a map row: inside its braces when written {...}, else as a line under it.
@@ -291,7 +299,8 @@ function sourceOf(node) {
 
 function renderTables() {
   const box = $('tables');
-  if (box.contains(document.activeElement) && document.activeElement.tagName === 'INPUT') return; // typing there
+  // the tables are drawn again from the text as read, the cell being typed in kept in focus
+  const active = box.contains(document.activeElement) ? document.activeElement.dataset.cell : null;
   box.textContent = '';
   if (!state.outline || !state.outline.entries) {
     box.append(el('p', {class: 'hint'}, 'The tables show the model once its text reads.'));
@@ -299,6 +308,16 @@ function renderTables() {
   }
   for (const s of SECTIONS) box.append(sectionTable(s));
   box.append(loadsTable());
+  if (active) {
+    const again = [...box.querySelectorAll('input')].find(i => i.dataset.cell === active);
+    if (again) again.focus();
+  }
+}
+
+function tag(td, cell) {
+  const i = td.querySelector('input');
+  if (i) i.dataset.cell = cell;
+  return td;
 }
 
 function sectionTable(s) {
@@ -316,16 +335,17 @@ function sectionTable(s) {
   const spans = rows.map(r => ({first: r.line, last: lastLine(r.value)}));
   for (const r of rows) {
     const tr = el('tr', {'data-name': r.key});
-    const nameCell = el('input', {value: r.key, 'aria-label': 'name'});
+    const nameCell = el('input', {value: r.key, 'aria-label': 'name', 'data-cell': s.key + '|' + r.key + '|name'});
     nameCell.addEventListener('change', () => replaceValue({line: r.line, col: r.col}, nameCell.value));
     tr.append(el('td', {}, nameCell));
     const v = r.value;
     columns.forEach((c, k) => {
-      if (s.list && v.items) tr.append(cellFor(v.items[k], null));
-      else if (v.text !== undefined) tr.append(c === s.single ? cellFor(v, null) : el('td', {class: 'ro'}, ''));
+      const cell = s.key + '|' + r.key + '|' + c;
+      if (s.list && v.items) tr.append(tag(cellFor(v.items[k], null), cell));
+      else if (v.text !== undefined) tr.append(c === s.single ? tag(cellFor(v, null), cell) : el('td', {class: 'ro'}, ''));
       else if (v.entries) {
         const f = v.entries.find(e => e.key === c);
-        tr.append(cellFor(f && f.value, val => addField(v, c, val)));
+        tr.append(tag(cellFor(f && f.value, val => addField(v, c, val)), cell));
       } else tr.append(el('td', {class: 'ro'}, ''));
     });
     const del = el('button', {type: 'button', title: 'remove ' + r.key}, '×');
@@ -378,13 +398,13 @@ function loadsTable() {
   const columns = LOAD_COLUMNS.filter(c => used.has(c));
   table.append(el('tr', {}, el('th', {}, 'case'), el('th', {}, 'type'), el('th', {}, 'list'), ...columns.map(c => el('th', {}, c)), el('th', {}, '')));
   const spans = rows.map(r => ({first: r.item.line, last: lastLine(r.item)}));
-  for (const r of rows) {
+  rows.forEach((r, index) => {
     const type = (r.lc.value.entries || []).find(e => e.key === 'type');
     const tr = el('tr', {'data-case': r.lc.key});
     tr.append(el('td', {}, r.lc.key), type ? cellFor(type.value, null) : el('td', {}, ''), el('td', {}, r.list.key));
     columns.forEach(c => {
       const f = (r.item.entries || []).find(e => e.key === c);
-      tr.append(cellFor(f && f.value, val => addField(r.item, c, val)));
+      tr.append(tag(cellFor(f && f.value, val => addField(r.item, c, val)), 'loads|' + index + '|' + c));
     });
     const del = el('button', {type: 'button', title: 'remove this load'}, '×');
     del.addEventListener('click', () => {
@@ -395,7 +415,7 @@ function loadsTable() {
     });
     tr.append(el('td', {}, del));
     table.append(tr);
-  }
+  });
   if (!rows.length) table.append(el('tr', {}, el('td', {colspan: 3, class: 'ro'}, 'no loads yet: write them in the text (format reference, section 2)')));
   return table;
 }
