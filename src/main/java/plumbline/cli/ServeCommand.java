@@ -52,7 +52,7 @@ final class ServeCommand implements Callable<Integer> {
             stopped.countDown();
         }, "workbench stop"));
         out.println("Workbench for the files in " + folder.toRealPath());
-        out.println("Open this address in your browser (it carries the access key; keep it to yourself):");
+        out.println("Open this address in a browser (it holds the access key; keep it private):");
         out.println("  " + w.address());
         out.println("Listening on 127.0.0.1 only. Press Ctrl-C to stop.");
         out.flush();

@@ -411,12 +411,43 @@ function loadsTable() {
       const t = text.value;
       const lineText = t.split('\n')[r.item.line - 1];
       if (!/^\s*-\s/.test(lineText)) { say('This load shares its line with another; delete it in the text', true); return; }
-      removeRow(r.item.line, lastLine(r.item), spans);
+      // the only load of its list takes the list's key with it
+      if (r.list.value.items.length === 1 && r.list.line < r.item.line) removeRow(r.list.line, lastLine(r.item), []);
+      else removeRow(r.item.line, lastLine(r.item), spans);
     });
     tr.append(el('td', {}, del));
     table.append(tr);
   });
-  if (!rows.length) table.append(el('tr', {}, el('td', {colspan: 3, class: 'ro'}, 'no loads yet: write them in the text (format reference, section 2)')));
+  // a load to add: case, list and fields, written as a '- {...}' item after the list's last
+  const add = el('tr', {class: 'add'});
+  const caseIn = el('select', {'aria-label': 'new load case'});
+  cases.forEach(c => caseIn.append(el('option', {value: c.key}, c.key)));
+  const listIn = el('select', {'aria-label': 'new load list'});
+  ['member_loads', 'node_loads'].forEach(l => listIn.append(el('option', {value: l}, l)));
+  add.append(el('td', {}, caseIn), el('td', {}, ''), el('td', {}, listIn));
+  const fields = ['member', 'node', 'w', 'P', 'M', 'at', 'dir', 'Fx', 'Fy', 'Mz'];
+  const inputs = {};
+  const fieldBox = el('td', {colspan: Math.max(1, columns.length)});
+  fields.forEach(f => { inputs[f] = el('input', {placeholder: f, size: 5, 'aria-label': 'new load ' + f}); fieldBox.append(inputs[f]); });
+  const addButton = el('button', {type: 'button'}, 'Add load');
+  addButton.addEventListener('click', () => {
+    const c = cases.find(x => x.key === caseIn.value);
+    if (!c) { say('Write a load case in the text first', true); return; }
+    const pairs = fields.filter(f => inputs[f].value.trim()).map(f => f + ': ' + yamlValue(inputs[f].value));
+    if (!pairs.length) { say('Give the load its fields', true); return; }
+    const item = '{' + pairs.join(', ') + '}';
+    const list = (c.value.entries || []).find(e => e.key === listIn.value);
+    if (list && list.value.items && list.value.items.length) {
+      const first = list.value.items[0];
+      const dash = text.value.split('\n')[first.line - 1].indexOf('-');
+      insertLineAfter(lastLine(list.value), ' '.repeat(Math.max(0, dash)) + '- ' + item);
+    } else if (!list && c.value.entries && c.value.entries.length) {
+      const indent = ' '.repeat(c.value.entries[0].col - 1);
+      insertLineAfter(lastLine(c.value), indent + listIn.value + ':\n' + indent + '  - ' + item);
+    } else say('Add this load in the text (the list is written in another form)', true);
+  });
+  add.append(fieldBox, el('td', {}, addButton));
+  table.append(add);
   return table;
 }
 

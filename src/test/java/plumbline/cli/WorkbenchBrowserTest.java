@@ -113,6 +113,21 @@ class WorkbenchBrowserTest {
         assertEquals(3, browser.findElements(By.cssSelector("#drawing line.member")).size());
         assertEquals(2, browser.findElements(By.cssSelector("#drawing g.support")).size());
 
+        // add a load through the loads table, then take it out again: the text follows both ways
+        new org.openqa.selenium.support.ui.Select(browser.findElement(By.cssSelector("table[data-section=loads] select[aria-label='new load case']")))
+                .selectByValue("W");
+        new org.openqa.selenium.support.ui.Select(browser.findElement(By.cssSelector("table[data-section=loads] select[aria-label='new load list']")))
+                .selectByValue("node_loads");
+        browser.findElement(By.cssSelector("input[aria-label='new load node']")).sendKeys("B");
+        browser.findElement(By.cssSelector("input[aria-label='new load Fx']")).sendKeys("5");
+        browser.findElement(By.xpath("//button[text()='Add load']")).click();
+        wait.until(d -> ((String) js("return document.getElementById('model-text').value"))
+                .contains("    node_loads:\n      - {node: B, Fx: 5}\n"));
+        wait.until(d -> d.findElements(By.cssSelector("table[data-section=loads] tr[data-case=W]")).size() == 2);
+        List<WebElement> wRows = browser.findElements(By.cssSelector("table[data-section=loads] tr[data-case=W]"));
+        wRows.get(1).findElement(By.tagName("button")).click();
+        wait.until(d -> edited.equals(js("return document.getElementById('model-text').value")));
+
         // save it into the folder
         WebElement name = browser.findElement(By.id("model-name"));
         name.clear();
