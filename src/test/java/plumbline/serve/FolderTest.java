@@ -72,4 +72,24 @@ class FolderTest {
             assertTrue(s.noneMatch(p -> p.getFileName().toString().contains(".part")), "no working file left behind");
         }
     }
+
+    @Test
+    void limitsHoldAtTheirEdges() throws Exception {
+        Folder f = folder();
+        // a forbidden character refused wherever it stands, the first place included
+        for (String name : new String[]{"\\x.yaml", ":x.yaml", "\0x.yaml", "x\\y.yaml", "x:y.yaml"}) {
+            assertEquals(400, assertThrows(Folder.Refused.class, () -> f.resolve(name), name).status, name);
+        }
+        String longest = "a".repeat(250) + ".yaml";
+        assertEquals(f.root().resolve(longest), f.resolve(longest), "255 characters is a file name");
+        Folder.Refused tooLong = assertThrows(Folder.Refused.class, () -> f.resolve("b" + longest));
+        assertTrue(tooLong.getMessage().length() < 160 && tooLong.getMessage().contains("..."), "a long name is shortened in the message");
+        byte[] exactly = new byte[(int) Folder.MAX_FILE_BYTES];
+        Files.write(f.root().resolve("big.yaml"), exactly);
+        assertEquals(exactly.length, f.read("big.yaml").length);
+        Files.write(f.root().resolve("big.yaml"), new byte[exactly.length + 1]);
+        assertEquals(413, assertThrows(Folder.Refused.class, () -> f.read("big.yaml")).status);
+        for (int i = 0; i < Folder.MAX_LISTED + 5; i++) Files.writeString(f.root().resolve(String.format("m%03d.yaml", i)), "x");
+        assertEquals(Folder.MAX_LISTED, f.list().size());
+    }
 }
