@@ -49,6 +49,8 @@ final class ServeCommand implements Callable<Integer> {
         CountDownLatch stopped = new CountDownLatch(1);
         Runtime.getRuntime().addShutdownHook(new Thread(() -> {
             w.close();
+            out.println("Workbench stopped; the port is free.");
+            out.flush();
             stopped.countDown();
         }, "workbench stop"));
         out.println("Workbench for the files in " + folder.toRealPath());
