@@ -2,8 +2,12 @@ package plumbline.io;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.StreamWriteFeature;
+import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.SerializerProvider;
+import com.fasterxml.jackson.databind.module.SimpleModule;
+import com.fasterxml.jackson.databind.ser.std.StdSerializer;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.file.Files;
@@ -67,6 +71,15 @@ public final class OutputFiles {
         ObjectMapper m = new ObjectMapper(JsonFactory.builder().enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
                 .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build());
         if (indent) m.enable(SerializationFeature.INDENT_OUTPUT);
+        // a streamed part of the tree writes itself into the same generator (same layout as a map would get)
+        SimpleModule streamed = new SimpleModule();
+        streamed.addSerializer(JsonOut.Streamed.class, new StdSerializer<>(JsonOut.Streamed.class) {
+            @Override
+            public void serialize(JsonOut.Streamed value, JsonGenerator g, SerializerProvider p) throws IOException {
+                value.write(new JsonOut(g));
+            }
+        });
+        m.registerModule(streamed);
         return m;
     }
 

@@ -3,6 +3,7 @@ package plumbline.report;
 import java.io.IOException;
 import java.io.InputStream;
 import java.util.ArrayList;
+import java.io.IOException;
 import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -12,6 +13,7 @@ import plumbline.model.Claim;
 import plumbline.model.LimitState;
 import plumbline.model.Model;
 import plumbline.model.Quantity;
+import plumbline.io.JsonOut;
 import plumbline.review.Agreement;
 import plumbline.review.Analysis;
 import plumbline.review.ClaimResult;
@@ -161,33 +163,44 @@ public final class ResultsTree {
         o.put("origin", set.origin());
         if (set.limitState() != LimitState.NONE) o.put("limit_state", set.limitState().name());
         o.put("pattern_envelope", r.patterned());
-        Map<String, Object> reacRange = new LinkedHashMap<>();
-        Map<String, Object> reac = triples(u, rep.reactions().keySet(), new String[]{"Fx", "Fy", "Mz"},
-                new Dimension[]{Dimension.FORCE, Dimension.FORCE, Dimension.MOMENT}, r::reaction, reacRange);
-        o.put("reactions", reac);
-        Map<String, Object> mem = new LinkedHashMap<>();
-        for (String name : rep.members().keySet()) {
-            Map<String, Object> p = new LinkedHashMap<>();
-            Map<String, Object> at = new LinkedHashMap<>();
-            Map<String, Object> loaded = new LinkedHashMap<>();
-            for (Quantity q : PEAKS) {
-                LoadSetResult.Peak pk = r.peak(name, q);
-                p.put(q.symbol, out(u, pk.value(), q.dimension));
-                at.put(q.symbol, out(u, pk.xM(), Dimension.LENGTH));
-                if (r.patterned()) loaded.put(q.symbol, pk.loadedMembers());
-            }
-            p.put("at", at);
-            if (r.patterned()) p.put("loaded_members", loaded);
-            mem.put(name, p);
+        // the per-member and per-node parts are written as they are read, never held as a tree
+        // (a frame of 10,000 members has 200,000 numbers per load set)
+        String[] reactionKeys = {"Fx", "Fy", "Mz"}, displacementKeys = {"ux", "uy", "rz"};
+        Dimension[] reactionDims = {Dimension.FORCE, Dimension.FORCE, Dimension.MOMENT};
+        Dimension[] displacementDims = {Dimension.LENGTH, Dimension.LENGTH, Dimension.NONE};
+        o.put("reactions", triples(u, rep.reactions().keySet(), reactionKeys, reactionDims, r::reaction, false));
+        o.put("members", (JsonOut.Streamed) out -> members(u, rep.members().keySet(), r, out));
+        o.put("displacements", triples(u, rep.displacements().keySet(), displacementKeys, displacementDims, r::displacement, false));
+        if (r.patterned()) {
+            o.put("envelope", map("reactions", triples(u, rep.reactions().keySet(), reactionKeys, reactionDims, r::reaction, true),
+                    "displacements", triples(u, rep.displacements().keySet(), displacementKeys, displacementDims, r::displacement, true)));
         }
-        o.put("members", mem);
-        Map<String, Object> dispRange = new LinkedHashMap<>();
-        Map<String, Object> disp = triples(u, rep.displacements().keySet(), new String[]{"ux", "uy", "rz"},
-                new Dimension[]{Dimension.LENGTH, Dimension.LENGTH, Dimension.NONE}, r::displacement, dispRange);
-        o.put("displacements", disp);
-        if (r.patterned()) o.put("envelope", map("reactions", reacRange, "displacements", dispRange));
         o.put("equilibrium", map("residual", num(r.equilibriumResidual())));
         return o;
+    }
+
+    /** Every member's peaks of one load set, where each occurs, and (pattern envelope) the members loaded for it. */
+    private static void members(UnitSystem u, Collection<String> names, LoadSetResult r, JsonOut out) throws IOException {
+        LoadSetResult.Peak[] peaks = new LoadSetResult.Peak[PEAKS.size()];
+        out.startObject();
+        for (String name : names) {
+            out.name(name).startObject();
+            for (int i = 0; i < peaks.length; i++) {
+                Quantity q = PEAKS.get(i);
+                peaks[i] = r.peak(name, q);
+                out.name(q.symbol).number(u.fromInternal(peaks[i].value(), q.dimension));
+            }
+            out.name("at").startObject();
+            for (int i = 0; i < peaks.length; i++) out.name(PEAKS.get(i).symbol).number(u.fromInternal(peaks[i].xM(), Dimension.LENGTH));
+            out.endObject();
+            if (r.patterned()) {
+                out.name("loaded_members").startObject();
+                for (int i = 0; i < peaks.length; i++) out.name(PEAKS.get(i).symbol).texts(peaks[i].loadedMembers());
+                out.endObject();
+            }
+            out.endObject();
+        }
+        out.endObject();
     }
 
     /**
@@ -206,25 +219,29 @@ public final class ResultsTree {
         Map<String, Object> out = new LinkedHashMap<>();
         out.put("combinations", combos.stream().map(LoadSet::name).toList());
         if (combos.isEmpty()) return out;
-        Map<String, Object> members = new LinkedHashMap<>();
-        for (String mem : m.members().keySet()) {
-            Map<String, Object> one = new LinkedHashMap<>();
-            for (Quantity q : PEAKS) {
-                double best = Double.NaN;
-                String gov = null;
-                for (LoadSet s : combos) {
-                    double v = sols.get(s.name()).peak(mem, q).value();
-                    boolean better = Double.isNaN(best) || (q.extreme == Quantity.Extreme.MIN ? v < best : v > best);
-                    if (better) {
-                        best = v;
-                        gov = s.name();
+        List<LoadSetResult> results = combos.stream().map(s -> sols.get(s.name())).toList();
+        out.put("members", (JsonOut.Streamed) json -> {
+            json.startObject();
+            for (String mem : m.members().keySet()) {
+                json.name(mem).startObject();
+                for (Quantity q : PEAKS) {
+                    double best = Double.NaN;
+                    String gov = null;
+                    for (int k = 0; k < combos.size(); k++) {
+                        double v = results.get(k).peak(mem, q).value();
+                        boolean better = Double.isNaN(best) || (q.extreme == Quantity.Extreme.MIN ? v < best : v > best);
+                        if (better) {
+                            best = v;
+                            gov = combos.get(k).name();
+                        }
                     }
+                    json.name(q.symbol).startObject().name("value").number(u.fromInternal(best, q.dimension)).name("governing").text(gov)
+                            .endObject();
                 }
-                one.put(q.symbol, map("value", out(u, best, q.dimension), "governing", gov));
+                json.endObject();
             }
-            members.put(mem, one);
-        }
-        out.put("members", members);
+            json.endObject();
+        });
         Map<String, Object> reactions = new LinkedHashMap<>();
         String[] keys = {"Fx", "Fy", "Mz"};
         Dimension[] dims = {Dimension.FORCE, Dimension.FORCE, Dimension.MOMENT};
@@ -258,23 +275,29 @@ public final class ResultsTree {
     }
 
     /**
-     * Three components per node: the bound of larger magnitude under its key, both bounds
-     * into {@code ranges} (they coincide unless the set is a pattern envelope).
+     * Three components per node, written as they are read: the bound of larger magnitude
+     * under its key, or ({@code ranges}) both bounds as {min, max} (they coincide unless the
+     * set is a pattern envelope).
      */
-    static Map<String, Object> triples(UnitSystem u, Collection<String> nodes, String[] keys, Dimension[] dims,
-                                       Bounded value, Map<String, Object> ranges) {
-        Map<String, Object> out = new LinkedHashMap<>();
-        for (String node : nodes) {
-            Map<String, Object> one = new LinkedHashMap<>(), range = new LinkedHashMap<>();
-            for (int c = 0; c < 3; c++) {
-                double hi = value.value(node, c, true), lo = value.value(node, c, false);
-                one.put(keys[c], out(u, Math.abs(lo) > Math.abs(hi) ? lo : hi, dims[c]));
-                range.put(keys[c], map("min", out(u, lo, dims[c]), "max", out(u, hi, dims[c])));
+    static JsonOut.Streamed triples(UnitSystem u, Collection<String> nodes, String[] keys, Dimension[] dims, Bounded value,
+                                    boolean ranges) {
+        return out -> {
+            out.startObject();
+            for (String node : nodes) {
+                out.name(node).startObject();
+                for (int c = 0; c < 3; c++) {
+                    double hi = value.value(node, c, true), lo = value.value(node, c, false);
+                    if (ranges) {
+                        out.name(keys[c]).startObject().name("min").number(u.fromInternal(lo, dims[c]))
+                                .name("max").number(u.fromInternal(hi, dims[c])).endObject();
+                    } else {
+                        out.name(keys[c]).number(u.fromInternal(Math.abs(lo) > Math.abs(hi) ? lo : hi, dims[c]));
+                    }
+                }
+                out.endObject();
             }
-            out.put(node, one);
-            ranges.put(node, range);
-        }
-        return out;
+            out.endObject();
+        };
     }
 
     static Map<String, Object> claim(UnitSystem u, ClaimResult r) {
