@@ -1,6 +1,6 @@
 package plumbline.solve;
 
-import java.util.TreeSet;
+import java.util.Arrays;
 
 /**
  * Exact internal forces and transverse displacement along one member, from the forces
@@ -29,16 +29,7 @@ public record MemberResponse(Piecewise axial, Piecewise shear, Piecewise moment,
      */
     public static MemberResponse of(double[] fStart, MemberActions actions, double eiNm2, double vStartM, double vEndM) {
         double len = actions.lengthM();
-        TreeSet<Double> bp = new TreeSet<>();
-        bp.add(0.0);
-        bp.add(len);
-        for (MemberActions.Linear l : actions.distributed()) {
-            bp.add(l.aM());
-            bp.add(l.bM());
-        }
-        for (MemberActions.Point p : actions.points()) bp.add(p.aM());
-        for (MemberActions.Couple c : actions.couples()) bp.add(c.aM());
-        double[] x = bp.stream().mapToDouble(Double::doubleValue).toArray();
+        double[] x = breakpoints(actions, len);
         int n = x.length - 1;
         Poly[] np = new Poly[n], vp = new Poly[n], mp = new Poly[n], wp = new Poly[n];
         double nAt = -fStart[0], vAt = fStart[1], mAt = -fStart[2];
@@ -86,12 +77,28 @@ public record MemberResponse(Piecewise axial, Piecewise shear, Piecewise moment,
         return new MemberResponse(new Piecewise(x, np), new Piecewise(x, vp), new Piecewise(x, mp), new Piecewise(x, wp));
     }
 
+    /** 0, L and every place a load starts, ends or acts, in order, each once. */
+    private static double[] breakpoints(MemberActions actions, double len) {
+        double[] all = new double[2 + 2 * actions.distributed().size() + actions.points().size() + actions.couples().size()];
+        int n = 0;
+        all[n++] = 0.0;
+        all[n++] = len;
+        for (MemberActions.Linear l : actions.distributed()) {
+            all[n++] = l.aM();
+            all[n++] = l.bM();
+        }
+        for (MemberActions.Point p : actions.points()) all[n++] = p.aM();
+        for (MemberActions.Couple c : actions.couples()) all[n++] = c.aM();
+        Arrays.sort(all);
+        int k = 0;
+        for (int i = 0; i < all.length; i++) if (k == 0 || Double.compare(all[i], all[k - 1]) != 0) all[k++] = all[i];
+        return Arrays.copyOf(all, k);
+    }
+
     /** Peaks of format reference (src/site/markdown/formats.md) section 4, exact, in SI, with their positions along the member. */
     public Peaks peaks() {
-        Piecewise.Extreme nMax = axial.max(), nMin = axial.min();
-        Piecewise.Extreme vMax = shear.max(), vMin = shear.min();
-        Piecewise.Extreme mMax = moment.max(), mMin = moment.min();
-        Piecewise.Extreme dMax = deflection.max(), dMin = deflection.min();
+        Piecewise.Extreme[] n = axial.range(), v = shear.range(), m = moment.range(), d = deflection.range();
+        Piecewise.Extreme nMax = n[0], nMin = n[1], vMax = v[0], vMin = v[1], mMax = m[0], mMin = m[1], dMax = d[0], dMin = d[1];
         Piecewise.Extreme defl = Math.abs(dMin.value()) > Math.abs(dMax.value())
                 ? new Piecewise.Extreme(Math.abs(dMin.value()), dMin.xM()) : new Piecewise.Extreme(Math.abs(dMax.value()), dMax.xM());
         return new Peaks(nMax, nMin, vMax, vMin, mMax, mMin, defl);

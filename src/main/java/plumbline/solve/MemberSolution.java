@@ -26,6 +26,11 @@ public record MemberSolution(double[] endForcesLocal, double vStartM, double vEn
         return new MemberSolution(endForcesLocal.clone(), vStartM, vEndM, actions, r, peaks);
     }
 
+    /** One of the end forces in local axes, by index as in {@link #endForcesLocal()} (no copy). */
+    public double endForceLocal(int i) {
+        return endForcesLocal[i];
+    }
+
     @Override
     public double[] endForcesLocal() {
         return endForcesLocal.clone();

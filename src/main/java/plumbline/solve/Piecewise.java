@@ -57,33 +57,41 @@ public final class Piecewise {
 
     /** Largest value over [0, L], one-sided limits at breakpoints included; exact. */
     public Extreme max() {
-        return extreme(1.0);
+        return range()[0];
     }
 
     public Extreme min() {
-        Extreme e = extreme(-1.0);
-        return new Extreme(-e.value, e.xM);
+        return range()[1];
     }
 
-    private Extreme extreme(double sign) {
-        double best = Double.NEGATIVE_INFINITY, where = 0;
+    /**
+     * The largest and the smallest value over [0, L] with where each first occurs, from one
+     * pass over the candidates: each piece's ends and the roots of its derivative inside it
+     * (the derivative's roots are found once for both).
+     */
+    public Extreme[] range() {
+        double hi = Double.NEGATIVE_INFINITY, lo = Double.POSITIVE_INFINITY, hiAt = 0, loAt = 0;
         for (int k = 0; k < pieces.length; k++) {
             double h = x[k + 1] - x[k];
             Poly p = pieces[k];
-            double[] cand = p.derivative().rootsIn(h);
-            double[] ts = Arrays.copyOf(cand, cand.length + 2);
-            ts[cand.length] = 0;
-            ts[cand.length + 1] = h;
-            for (double t : ts) {
-                double v = sign * p.at(t);
-                if (v > best) {
-                    best = v;
-                    where = x[k] + t;
+            double[] cand = p.degree() <= 1 ? NONE : p.derivative().rootsIn(h);
+            for (int i = 0; i < cand.length + 2; i++) {
+                double t = i < cand.length ? cand[i] : i == cand.length ? 0 : h;
+                double v = p.at(t);
+                if (v > hi) {
+                    hi = v;
+                    hiAt = x[k] + t;
+                }
+                if (v < lo) {
+                    lo = v;
+                    loAt = x[k] + t;
                 }
             }
         }
-        return new Extreme(best, where);
+        return new Extreme[]{new Extreme(hi, hiAt), new Extreme(lo, loAt)};
     }
+
+    private static final double[] NONE = new double[0];
 
     public double[] breakpoints() {
         return x.clone();

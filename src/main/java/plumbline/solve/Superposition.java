@@ -34,8 +34,7 @@ public final class Superposition {
             for (var p : parts.entrySet()) {
                 MemberSolution s = p.getKey().members().get(m.name());
                 double k = p.getValue();
-                double[] fe = s.endForcesLocal();
-                for (int i = 0; i < 6; i++) f[i] += k * fe[i];
+                for (int i = 0; i < 6; i++) f[i] += k * s.endForceLocal(i);
                 vs += k * s.vStartM();
                 ve += k * s.vEndM();
                 if (k != 0) a = a.plus(s.actions().scaled(k));
