@@ -1,6 +1,9 @@
 package plumbline.cli;
 
 import java.io.PrintWriter;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.function.Supplier;
 import picocli.CommandLine.Command;
 import picocli.CommandLine;
 import plumbline.report.ResultsTree;
@@ -11,8 +14,8 @@ import plumbline.report.ResultsTree;
  */
 @Command(name = "plumbline", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = "Independent check of plane frame, beam and truss models and of the results claimed for them.",
-        subcommands = {CheckCommand.class, SolveCommand.class, TemplateCommand.class, ServeCommand.class, UnitsCommand.class, SchemaCommand.class, BenchCommand.class,
-                CommandLine.HelpCommand.class})
+        // the subcommands are added in commandLine(), only the one asked for when it is named
+        subcommands = {})
 public final class Main implements Runnable {
 
     public static final int OK = 0, FLAGGED = 1, INPUT = 2, INTERNAL = 3;
@@ -32,9 +35,38 @@ public final class Main implements Runnable {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
 
+    /** Every command, in the order the usage lists them. */
+    private static Map<String, Supplier<Object>> commands() {
+        Map<String, Supplier<Object>> all = new LinkedHashMap<>();
+        all.put("check", CheckCommand::new);
+        all.put("solve", SolveCommand::new);
+        all.put("template", TemplateCommand::new);
+        all.put("serve", ServeCommand::new);
+        all.put("units", UnitsCommand::new);
+        all.put("schema", SchemaCommand::new);
+        all.put("bench", BenchCommand::new);
+        all.put("help", CommandLine.HelpCommand::new);
+        return all;
+    }
+
+    /**
+     * The command line for these arguments. When they name a command, only that command is
+     * built (picocli reads every command's annotations when it is added, a tenth of a short
+     * run's time); for help, usage and a mistyped command, all are, so that help and the
+     * suggestions list every one.
+     */
+    static CommandLine commandLine(String[] args) {
+        CommandLine cl = new CommandLine(new Main());
+        Map<String, Supplier<Object>> all = commands();
+        String first = args.length > 0 ? args[0] : "";
+        if (all.containsKey(first) && !first.equals("help")) cl.addSubcommand(first, all.get(first).get());
+        else all.forEach((name, make) -> cl.addSubcommand(name, make.get()));
+        return cl;
+    }
+
     /** Runs the command line with the given writers; returns the exit code (never exits). */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
-        CommandLine cl = new CommandLine(new Main());
+        CommandLine cl = commandLine(args);
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler((ex, line, parsed) -> {

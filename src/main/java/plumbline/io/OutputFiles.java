@@ -4,10 +4,7 @@ import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
-import com.fasterxml.jackson.databind.SerializerProvider;
-import com.fasterxml.jackson.databind.module.SimpleModule;
-import com.fasterxml.jackson.databind.ser.std.StdSerializer;
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.file.Files;
@@ -57,30 +54,55 @@ public final class OutputFiles {
 
     /** The tree as JSON text, indented for reading or compact (large results). */
     public static byte[] json(Map<String, Object> tree, boolean indent) throws IOException {
-        return mapper(indent).writeValueAsBytes(tree);
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        json(tree, indent, out);
+        return out.toByteArray();
     }
 
-    /** Writes the tree as JSON text straight to a stream (a large result is never held whole in memory as text). */
+    /**
+     * Writes the tree as JSON text straight to a stream (a large result is never held whole in
+     * memory as text). Written by Jackson's streaming generator, value by value: the tree holds
+     * only maps, lists, texts, numbers, booleans, nulls and streamed parts.
+     */
     public static void json(Map<String, Object> tree, boolean indent, OutputStream out) throws IOException {
-        mapper(indent).writeValue(out, tree);
+        // the shortest decimal that reads back as the same double (Schubfach), written without Double.toString's
+        // detours; the stream is the caller's to close
+        JsonFactory f = JsonFactory.builder().enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
+                .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build();
+        try (JsonGenerator g = f.createGenerator(out)) {
+            if (indent) g.useDefaultPrettyPrinter();
+            write(g, tree);
+        }
     }
 
-    private static ObjectMapper mapper(boolean indent) {
-        // the shortest decimal that reads back as the same double (Schubfach), written without Double.toString's detours;
-        // the stream is the caller's to close
-        ObjectMapper m = new ObjectMapper(JsonFactory.builder().enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
-                .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build());
-        if (indent) m.enable(SerializationFeature.INDENT_OUTPUT);
-        // a streamed part of the tree writes itself into the same generator (same layout as a map would get)
-        SimpleModule streamed = new SimpleModule();
-        streamed.addSerializer(JsonOut.Streamed.class, new StdSerializer<>(JsonOut.Streamed.class) {
-            @Override
-            public void serialize(JsonOut.Streamed value, JsonGenerator g, SerializerProvider p) throws IOException {
-                value.write(new JsonOut(g));
+    private static void write(JsonGenerator g, Object v) throws IOException {
+        if (v == null) {
+            g.writeNull();
+        } else if (v instanceof Map<?, ?> m) {
+            g.writeStartObject();
+            for (var e : m.entrySet()) {
+                g.writeFieldName((String) e.getKey());
+                write(g, e.getValue());
             }
-        });
-        m.registerModule(streamed);
-        return m;
+            g.writeEndObject();
+        } else if (v instanceof Iterable<?> list) {
+            g.writeStartArray();
+            for (Object item : list) write(g, item);
+            g.writeEndArray();
+        } else if (v instanceof String s) {
+            g.writeString(s);
+        } else if (v instanceof Double d) {
+            g.writeNumber(d);
+        } else if (v instanceof Integer || v instanceof Long || v instanceof Short) {
+            g.writeNumber(((Number) v).longValue());
+        } else if (v instanceof Boolean b) {
+            g.writeBoolean(b);
+        } else if (v instanceof JsonOut.Streamed s) {
+            // a streamed part writes itself into the same generator, so it is laid out as a map would be
+            s.write(new JsonOut(g));
+        } else {
+            throw new IllegalArgumentException("no JSON form for a " + v.getClass().getName() + " in the results");
+        }
     }
 
     /** A JSON text parsed to plain maps and lists (for tests and the schema check). */
