@@ -314,7 +314,9 @@ public final class Diagrams {
                 double along = (ua[0] + (ub[0] - ua[0]) * t) * ex + (ua[1] + (ub[1] - ua[1]) * t) * ey;
                 double dx = ex * along - ey * v, dy = ey * along + ex * v;
                 line[i] = new double[]{a.xM() + ex * x, a.yM() + ey * x, dx, dy};
-                double d = Math.hypot(dx, dy);
+                // the length of a displacement of a drawing's scale: no overflow to guard against, so
+                // not Math.hypot, which is ten times slower (600,000 points on a 10,000-member frame)
+                double d = Math.sqrt(dx * dx + dy * dy);
                 if (d > largest * (1 + 1e-9)) {
                     largest = d;
                     atX = line[i][0];
