@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import plumbline.model.Combination;
 import plumbline.model.LoadCase;
 import plumbline.model.MemberLoad;
@@ -60,16 +62,30 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
     }
 
     public static Analysis of(Model model, List<Engine> engines) {
-        Determinacy.Result det = Determinacy.of(model);
         List<LoadSet> sets = loadSets(model);
         Model em = engineModel(model);
+        // the statics (determinacy and stability) on one core while the engines start on the other;
+        // on an unstable model the engines' work is discarded, as if they had not run
+        CompletableFuture<Determinacy.Result> statics = CompletableFuture.supplyAsync(() -> Determinacy.of(model));
+        // the engines, and the load sets of each, are independent of one another (pure functions of the
+        // model): they run side by side on the machine's cores and are gathered back in their order, so
+        // every number is the same as in one thread
+        List<Object> attempts = engines.parallelStream().map(e -> {
+            try {
+                return (Object) e.solve(em);
+            } catch (RuntimeException ex) {
+                return ex; // an engine may fail on a mechanism; the statics decide below whether that matters
+            }
+        }).toList();
+        Determinacy.Result det = joined(statics);
         Map<String, EngineResult> results = new LinkedHashMap<>();
         Map<String, Map<String, LoadSetResult>> sols = new LinkedHashMap<>();
         if (det.classification() != Determinacy.Classification.UNSTABLE) {
-            // the engines, and the load sets of each, are independent of one another (pure functions of the
-            // model): they run side by side on the machine's cores and are gathered back in their order, so
-            // every number is the same as in one thread
-            List<EngineResult> solved = engines.parallelStream().map(e -> e.solve(em)).toList();
+            List<EngineResult> solved = new ArrayList<>();
+            for (Object a : attempts) {
+                if (a instanceof RuntimeException ex) throw ex;
+                solved.add((EngineResult) a);
+            }
             for (int i = 0; i < engines.size(); i++) {
                 Engine e = engines.get(i);
                 EngineResult r = solved.get(i);
@@ -82,6 +98,16 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
             }
         }
         return new Analysis(model, em, det, sets, results, sols);
+    }
+
+    private static <T> T joined(CompletableFuture<T> f) {
+        try {
+            return f.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) throw r;
+            if (e.getCause() instanceof Error err) throw err;
+            throw e;
+        }
     }
 
     /** The result of load set {@code s} from the engine's load-case solutions, by superposition (pattern parts kept apart). */
