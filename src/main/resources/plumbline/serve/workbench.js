@@ -171,9 +171,15 @@ function valueEnd(t, start) {
   return i;
 }
 
-// A value as YAML writes it: plain when it reads back as itself, else in single quotes.
-function yamlValue(v) {
+function isJson() {
+  return /\.json$/i.test($('model-name').value.trim());
+}
+
+// A value as the model's text writes it. JSON: a number plain, anything else (a name, a key)
+// as a JSON string. YAML: plain when it reads back as itself, else in single quotes.
+function yamlValue(v, key) {
   const s = String(v).trim();
+  if (isJson()) return !key && /^-?(0|[1-9]\d*)(\.\d+)?([eE][-+]?\d+)?$/.test(s) ? s : JSON.stringify(s);
   if (s === '') return "''";
   if (/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(s)) return s;
   if (/^[A-Za-z0-9_.%+\-*/^ ()]+$/.test(s) && !/^[-?]/.test(s) && !/^(true|false|null|yes|no|on|off|~)$/i.test(s)) return s;
@@ -189,7 +195,7 @@ function setText(t, note) {
   validate();
 }
 
-function replaceValue(node, value) {
+function replaceValue(node, value, key) {
   const t = text.value;
   const start = offsetOf(t, node.line, node.col);
   const end = valueEnd(t, start);
@@ -200,11 +206,12 @@ function replaceValue(node, value) {
     validate();
     return;
   }
-  setText(t.slice(0, start) + yamlValue(value) + t.slice(end));
+  setText(t.slice(0, start) + yamlValue(value, key) + t.slice(end));
 }
 
 // Adds `key: value` to a map row: inside its braces when written {...}, else as a line under it.
 function addField(mapNode, key, value) {
+  if (isJson()) { say('In a JSON model, add fields in the text; the tables change values only', true); return; }
   const t = text.value;
   const start = offsetOf(t, mapNode.line, mapNode.col);
   const pair = key + ': ' + yamlValue(value);
@@ -234,6 +241,7 @@ function lastLine(node) {
 
 // Removes the lines a row is written on, when no other row shares them.
 function removeRow(firstLine, lastLineNo, siblings) {
+  if (isJson()) { say('In a JSON model, remove rows in the text; the tables change values only', true); return; }
   for (const s of siblings) {
     if (s.first !== firstLine && s.first <= lastLineNo && s.last >= firstLine) {
       say('This row shares its line with another; delete it in the text', true);
@@ -246,6 +254,7 @@ function removeRow(firstLine, lastLineNo, siblings) {
 }
 
 function insertLineAfter(line, content) {
+  if (isJson()) { say('In a JSON model, add rows in the text; the tables change values only', true); return; }
   const lines = text.value.split('\n');
   lines.splice(line, 0, content);
   setText(lines.join('\n'), 'Row added');
@@ -336,7 +345,7 @@ function sectionTable(s) {
   for (const r of rows) {
     const tr = el('tr', {'data-name': r.key});
     const nameCell = el('input', {value: r.key, 'aria-label': 'name', 'data-cell': s.key + '|' + r.key + '|name'});
-    nameCell.addEventListener('change', () => replaceValue({line: r.line, col: r.col}, nameCell.value));
+    nameCell.addEventListener('change', () => replaceValue({line: r.line, col: r.col}, nameCell.value, true));
     tr.append(el('td', {}, nameCell));
     const v = r.value;
     columns.forEach((c, k) => {
@@ -351,7 +360,7 @@ function sectionTable(s) {
     const del = el('button', {type: 'button', title: 'remove ' + r.key}, '×');
     del.addEventListener('click', () => removeRow(r.line, lastLine(r.value), spans));
     tr.append(el('td', {}, del));
-    tr.addEventListener('focusin', () => pick(s.key === 'members' ? 'member' : s.key === 'nodes' || s.key === 'supports' ? 'node' : null, r.key, false));
+    tr.addEventListener('focusin', () => pick(s.key === 'members' ? 'member' : s.key === 'nodes' || s.key === 'supports' ? 'node' : null, r.key));
     table.append(tr);
   }
   // a row to add: written after the last row, as the section's rows are written
@@ -372,6 +381,7 @@ function sectionTable(s) {
     const line = yamlValue(name) + ': ' + value;
     if (rows.length) insertLineAfter(lastLine(rows[rows.length - 1].value), ' '.repeat(rows[0].col - 1) + line);
     else if (entry) insertLineAfter(entry.line, '  ' + line);
+    else if (isJson()) say('In a JSON model, add sections in the text; the tables change values only', true);
     else setText(text.value.replace(/\n*$/, '\n') + s.key + ':\n  ' + line + '\n', 'Section added');
   });
   add.append(el('td', {}, addButton));
@@ -540,7 +550,7 @@ function draw() {
     if (m.hingeEnd || m.truss) put(structure, 'circle', {cx: x2 - ex * 7, cy: y2 - ey * 7, r: 3.5, class: 'hinge'});
     const hit = put(structure, 'line', {x1, y1, x2, y2, class: 'hit', 'data-member': m.name});
     put(hit, 'title', {}, m.name + ': ' + m.from + ' → ' + m.to + ', ' + m.length + (m.truss ? ', truss' : ''));
-    hit.addEventListener('click', () => pick('member', m.name, true));
+    hit.addEventListener('click', () => pick('member', m.name));
     put(labels, 'text', {x: mx - ey * 12, y: my + ex * 12 + 4, 'text-anchor': 'middle', class: 'name'}, m.name);
     if (flagged.members.has(m.name)) put(labels, 'text', {x: mx + ey * 14, y: my - ex * 14 + 4, 'text-anchor': 'middle', class: 'badge'}, '!' + flagged.members.get(m.name));
   }
@@ -573,7 +583,7 @@ function draw() {
     const c = put(structure, 'circle', {cx: X(n.x), cy: Y(n.y), r: 3.6, 'data-node': n.name,
       class: 'node' + (flagged.nodes.has(n.name) ? ' flagged' : '') + (state.picked && state.picked.kind === 'node' && state.picked.name === n.name ? ' picked' : '')});
     put(c, 'title', {}, n.name + ' (' + fmt(n.x) + ', ' + fmt(n.y) + ') ' + v.units.length);
-    c.addEventListener('click', () => pick('node', n.name, true));
+    c.addEventListener('click', () => pick('node', n.name));
     put(labels, 'text', {x: X(n.x) + 6, y: Y(n.y) - 6, class: 'name'}, n.name);
     if (flagged.nodes.has(n.name)) put(labels, 'text', {x: X(n.x) - 16, y: Y(n.y) - 6, class: 'badge'}, '!' + flagged.nodes.get(n.name));
   }
@@ -650,7 +660,7 @@ function fmt(x) {
 
 // ---------- the inspector: the picked member or node, its fields editable ----------
 
-function pick(kind, name, fromDrawing) {
+function pick(kind, name) {
   if (!kind) return;
   state.picked = {kind, name};
   const box = $('inspector');
@@ -686,7 +696,7 @@ function pick(kind, name, fromDrawing) {
       box.append(ct);
     }
   }
-  if (fromDrawing) draw(); else draw();
+  draw(); // the picked member or node is drawn in the picking colour
 }
 
 // ---------- claims ----------
@@ -954,7 +964,7 @@ function showResults(a) {
       el('td', {class: 'num'}, c.tolerance == null ? '' : (100 * c.tolerance) + '%'),
       el('td', {}, c.diagnosis || ''),
       el('td', {}, c.source || ''));
-    tr.addEventListener('click', () => pick(c.item === 'member' ? 'member' : 'node', c.name, true));
+    tr.addEventListener('click', () => pick(c.item === 'member' ? 'member' : 'node', c.name));
     t.append(tr);
   }
   box.append(t);

@@ -205,6 +205,44 @@ class WorkbenchBrowserTest {
         assertEquals(ReportPagesTest.pages(out.resolve("r.pdf")), ReportPagesTest.pages(downloads.resolve("portal-frame-report.pdf")));
     }
 
+    @Test
+    void aJsonModelsValuesAreEditedAsJson() {
+        browser.get(wb.address().toString());
+        wait.until(d -> messages().contains("reads without problems"));
+        String model = "{\n  \"format\": \"plumbline/1\",\n  \"units\": {\"force\": \"kN\", \"length\": \"m\"},\n"
+                + "  \"materials\": {\"steel\": {\"E\": \"210 GPa\"}},\n"
+                + "  \"sections\": {\"B1\": {\"A\": \"5380 mm2\", \"I\": \"8.36e7 mm4\", \"material\": \"steel\"}},\n"
+                + "  \"nodes\": {\"A\": [0, 0], \"B\": [6, 0]},\n  \"supports\": {\"A\": \"pinned\", \"B\": \"roller\"},\n"
+                + "  \"members\": {\"M1\": {\"from\": \"A\", \"to\": \"B\", \"section\": \"B1\"}}\n}\n";
+        WebElement name = browser.findElement(By.id("model-name"));
+        name.clear();
+        name.sendKeys("beam.json");
+        js("const t = document.getElementById('model-text'); t.value = arguments[0]; t.dispatchEvent(new Event('input'));", model);
+        wait.until(d -> messages().contains("reads without problems"));
+        browser.findElement(By.cssSelector("nav[data-group=model] button[data-tab=tables]")).click();
+        // a number stays a number; a name with a space becomes a JSON string, as key and as value
+        WebElement x = browser.findElement(By.cssSelector("table[data-section=nodes] tr[data-name=B] td:nth-child(2) input"));
+        x.sendKeys(Keys.chord(Keys.CONTROL, "a"), "8", Keys.TAB);
+        wait.until(d -> text().contains("\"B\": [8, 0]"));
+        WebElement key = browser.findElement(By.cssSelector("table[data-section=sections] tr[data-name=B1] td:nth-child(1) input"));
+        key.sendKeys(Keys.chord(Keys.CONTROL, "a"), "Beam 1", Keys.TAB);
+        wait.until(d -> text().contains("\"Beam 1\": {"));
+        WebElement section = browser.findElement(By.cssSelector("table[data-section=members] tr[data-name=M1] td:nth-child(4) input"));
+        section.sendKeys(Keys.chord(Keys.CONTROL, "a"), "Beam 1", Keys.TAB);
+        wait.until(d -> text().contains("\"section\": \"Beam 1\"}"));
+        wait.until(d -> messages().contains("reads without problems"));
+        assertEquals(Boolean.TRUE, js("try { JSON.parse(document.getElementById('model-text').value); return true; } catch (e) { return false; }"));
+        // rows are not added or removed in JSON text by the tables: said, and the text left alone
+        String before = text();
+        browser.findElement(By.cssSelector("table[data-section=supports] tr[data-name=B] button")).click();
+        assertTrue(browser.findElement(By.id("status")).getText().contains("JSON"), browser.findElement(By.id("status")).getText());
+        assertEquals(before, text());
+    }
+
+    String text() {
+        return (String) js("return document.getElementById('model-text').value");
+    }
+
     static boolean done(Path dir, String ending) {
         try (Stream<Path> s = Files.list(dir)) {
             List<String> names = s.map(p -> p.getFileName().toString()).toList();
