@@ -163,7 +163,7 @@ final class Api {
      * @param claims each {name, text}; a name ending in .csv is read as CSV claims
      * @param tolerance "5%" or "" for the defaults by kind
      */
-    Map<String, Object> check(String modelName, String modelText, List<Map<String, Object>> claims, String tolerance)
+    Map<String, Object> check(String modelName, String modelText, List<?> claims, String tolerance)
             throws Refused {
         double ratio = Double.NaN;
         if (tolerance != null && !tolerance.isBlank()) {
@@ -174,8 +174,12 @@ final class Api {
             }
         }
         List<Source> claimFiles = new ArrayList<>();
-        for (Map<String, Object> c : claims) {
-            claimFiles.add(new Source(String.valueOf(c.get("name")), String.valueOf(c.get("text")).getBytes(StandardCharsets.UTF_8)));
+        for (Object c : claims) {
+            if (!(c instanceof Map<?, ?> file) || !(file.get("name") instanceof String name) || name.isBlank()
+                    || !(file.get("text") instanceof String text)) {
+                throw new Refused(400, "each claims file is sent as {name, text}, the name ending in .csv, .yaml, .yml or .json");
+            }
+            claimFiles.add(new Source(name, text.getBytes(StandardCharsets.UTF_8)));
         }
         CheckInputs in;
         try {

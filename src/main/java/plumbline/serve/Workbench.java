@@ -165,8 +165,9 @@ public final class Workbench implements AutoCloseable {
             }
             case "POST check" -> {
                 Map<String, Object> body = body(ex);
-                @SuppressWarnings("unchecked")
-                List<Map<String, Object>> claims = body.get("claims") instanceof List<?> l ? (List<Map<String, Object>>) l : List.of();
+                Object listed = body.get("claims");
+                if (listed != null && !(listed instanceof List<?>)) throw new Api.Refused(400, "'claims' is a list of {name, text}");
+                List<?> claims = listed == null ? List.of() : (List<?>) listed;
                 Object tol = body.get("tolerance");
                 json(ex, api.check(text(body, "name"), text(body, "text"), claims, tol == null ? "" : String.valueOf(tol)));
             }

@@ -191,6 +191,13 @@ class WorkbenchApiTest {
         String problem = ((Map<?, ?>) ((List<?>) a.get("problems")).get(0)).get("text").toString();
         assertTrue(problem.startsWith("claims.csv:2:"), problem);
         assertEquals(400, api("POST", "/api/check", Map.of("name", "portal-frame.yaml", "text", "x", "tolerance", "150%")).statusCode());
+        // a malformed request is refused with a sentence, not answered as an internal error
+        for (Object claims : List.of("a.csv", List.of("a.csv"), List.of(Map.of("text", "x")), List.of(Map.of("name", "a.csv", "text", 3)))) {
+            HttpResponse<byte[]> r = api("POST", "/api/check", Map.of("name", "portal-frame.yaml", "text", "x", "claims", claims));
+            assertEquals(400, r.statusCode(), claims.toString());
+        }
+        assertEquals(400, send("POST", "/api/check", "not json", Map.of("X-Plumbline-Key", key)).statusCode());
+        assertEquals(400, api("POST", "/api/model", Map.of("name", "m.yaml")).statusCode());
     }
 
     @Test
