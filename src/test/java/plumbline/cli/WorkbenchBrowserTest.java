@@ -189,6 +189,9 @@ class WorkbenchBrowserTest {
         browser.findElement(By.cssSelector("nav[data-group=lower] button[data-tab=diagrams]")).click();
         wait.until(d -> !d.findElements(By.cssSelector("#diagrams img")).isEmpty()
                 && (Boolean) js("return [...document.querySelectorAll('#diagrams img')].every(i => i.complete && i.naturalWidth > 400)"));
+        Files.write(shots.resolve("diagrams.png"), browser.getScreenshotAs(OutputType.BYTES));
+        browser.findElement(By.cssSelector("nav[data-group=lower] button[data-tab=explanations]")).click();
+        Files.write(shots.resolve("explanations.png"), browser.getScreenshotAs(OutputType.BYTES));
 
         // the downloads are what check writes for the same files
         browser.findElement(By.cssSelector("nav[data-group=lower] button[data-tab=results]")).click();
