@@ -13,6 +13,7 @@ import plumbline.io.Outline;
 import plumbline.model.InputException;
 import plumbline.model.Model;
 import plumbline.model.Problem;
+import plumbline.report.ClaimLines;
 import plumbline.review.DrawnLoadSets;
 import plumbline.run.CheckInputs;
 import plumbline.run.Checked;
@@ -207,7 +208,8 @@ final class Api {
         }
         List<String> sets = new ArrayList<>(c.review().analysis().loadSets().stream().map(s -> s.name()).toList());
         return ModelView.map("status", "checked", "exit", c.exitCode(), "run", id, "console", c.console(false),
-                "loadSets", sets, "drawn", DrawnLoadSets.choose(c.review()).names(), "stem", stem);
+                "loadSets", sets, "drawn", DrawnLoadSets.choose(c.review()).names(), "stem", stem,
+                "claims", ClaimLines.of(c.review()));
     }
 
     CheckRun run(String id) throws Refused {

@@ -686,13 +686,14 @@ function pick(kind, name) {
     go.addEventListener('click', () => goToLine(row.line));
     box.append(go);
   }
-  if (state.results) {
-    const mine = (state.results.claims || []).filter(c => c.name === name && (c.item === 'member') === (kind === 'member'));
+  if (state.run && state.run.status === 'checked') {
+    const mine = state.run.claims.filter(c => c.name === name && (c.item === 'member') === (kind === 'member'));
     if (mine.length) {
       const ct = el('table', {class: 'grid'});
-      ct.append(el('caption', {}, 'Claims'));
+      ct.append(el('caption', {}, 'Claims (claimed / stiffness method, difference)'));
       for (const c of mine) ct.append(el('tr', {class: c.status === 'ok' ? '' : 'flag'}, el('td', {class: 'status-' + c.status}, c.status),
-        el('td', {}, c.quantity + ' ' + c.combo), el('td', {class: 'num'}, fmtNum(c.claimed)), el('td', {class: 'num'}, fmtNum(c.computed))));
+        el('td', {}, c.quantity + ' ' + c.combo), el('td', {class: 'num'}, c.claimed), el('td', {class: 'num'}, c.stiffness),
+        el('td', {class: 'num'}, c.difference)));
       box.append(ct);
     }
   }
@@ -877,13 +878,6 @@ $('save-claims').addEventListener('click', () => save($('claims-name').value, st
 
 // ---------- check ----------
 
-function fmtNum(x) {
-  if (x == null || Number.isNaN(x)) return '';
-  if (x === 0) return '0';
-  const a = Math.abs(x);
-  if (a >= 1e6 || a < 1e-3) return x.toExponential(3);
-  return String(+x.toPrecision(4));
-}
 
 $('check').addEventListener('click', async () => {
   const b = $('check');
@@ -916,15 +910,6 @@ $('check').addEventListener('click', async () => {
   }
 });
 
-// The unit of a claim's value in the results: the model's force and length units (format reference section 5).
-function unitOf(c, u) {
-  const q = c.quantity.replace(/_(max|min|abs|start|end)$/, '');
-  if (q === 'Mz' || q === 'M') return u.force + '*' + u.length;
-  if (q === 'Fx' || q === 'Fy' || q === 'N' || q === 'V') return u.force;
-  if (q === 'rz') return 'rad';
-  return u.length; // deflection, ux, uy
-}
-
 function showResultsProblems(problems) {
   const box = $('results');
   box.textContent = '';
@@ -945,25 +930,25 @@ function showResults(a) {
     el('a', {href: withKey('/api/run/' + a.run + '/results.json?download=1'), download: a.stem + '-results.json', id: 'download-json'}, 'Download the results (JSON)'));
   box.append(dl);
   const flagged = (r.claims || []).filter(c => c.status !== 'ok').length;
-  box.append(el('p', {}, (r.claims || []).length + ' claims, ' + flagged + ' flagged. Differences are relative to the computed value; '
-    + 'computed values by the ' + r.engine + ' method' + (r.agreement && r.agreement.max_relative_difference != null
-      ? ', the two methods agreeing to ' + r.agreement.max_relative_difference.toExponential(1) + ' (largest relative difference)' : '')
-    + '; values in ' + r.units.force + ' and ' + r.units.length + '.'));
+  box.append(el('p', {}, (r.claims || []).length + ' claims, ' + flagged + ' flagged. A difference is relative to the computed '
+    + 'value, or in units where the absolute floor governs (a claimed zero against rounding)'
+    + (r.agreement && r.agreement.max_relative_difference != null
+      ? '; the two methods agree to ' + r.agreement.max_relative_difference.toExponential(1) + ' (largest relative difference)' : '')
+    + '. The JSON and the PDF report give every figure in full.'));
+  // the rows as the report prints them (values to the same decimals, the difference in units where
+  // the absolute floor governs, the tolerance a claim was judged by), flagged first
   const t = el('table', {class: 'grid', id: 'discrepancies'});
-  t.append(el('tr', {}, ...['status', 'item', 'name', 'quantity', 'load set', 'claimed', 'computed', 'difference', 'tolerance', 'likely cause', 'written at']
-    .map(h => el('th', {}, h))));
+  t.append(el('tr', {}, ...['status', 'item', 'name', 'quantity', 'load set', 'claimed', 'stiffness method', 'force method',
+    'difference', 'tolerance', 'likely cause', 'written at'].map(h => el('th', {}, h))));
   const order = {mismatch: 0, marginal: 1, ok: 2};
-  const claims = [...(r.claims || [])].sort((x, y) => (order[x.status] ?? 3) - (order[y.status] ?? 3));
-  for (const c of claims) {
-    const unit = unitOf(c, r.units);
+  const rows = [...a.claims].sort((x, y) => (order[x.status] ?? 3) - (order[y.status] ?? 3));
+  for (const c of rows) {
     const tr = el('tr', {class: c.status === 'mismatch' ? 'flag' : c.status === 'marginal' ? 'mild' : '', 'data-id': c.id},
       el('td', {class: 'status-' + c.status}, c.status),
       el('td', {}, c.item), el('td', {}, c.name), el('td', {}, c.quantity), el('td', {}, c.combo),
-      el('td', {class: 'num'}, fmtNum(c.claimed) + ' ' + unit), el('td', {class: 'num'}, fmtNum(c.computed) + ' ' + unit),
-      el('td', {class: 'num'}, c.relative_difference == null ? '' : (100 * c.relative_difference).toPrecision(3) + '%'),
-      el('td', {class: 'num'}, c.tolerance == null ? '' : (100 * c.tolerance) + '%'),
-      el('td', {}, c.diagnosis || ''),
-      el('td', {}, c.source || ''));
+      el('td', {class: 'num'}, c.claimed), el('td', {class: 'num'}, c.stiffness), el('td', {class: 'num'}, c.force),
+      el('td', {class: 'num'}, c.difference), el('td', {class: 'num'}, c.tolerance),
+      el('td', {}, c.diagnosis), el('td', {}, c.source));
     tr.addEventListener('click', () => pick(c.item === 'member' ? 'member' : 'node', c.name));
     t.append(tr);
   }

@@ -180,6 +180,28 @@ class WorkbenchApiTest {
         assertEquals((byte) 0x89, png[0]);
         assertEquals('P', png[1]);
         assertEquals(404, send("GET", "/api/run/r999/results.json?k=" + key, null, Map.of()).statusCode());
+        // the page prints the claims as the report does: E's Fx to two decimals against -10.02 kN (statics of the
+        // sample, README), its difference relative
+        Map<?, ?> e = ((List<?>) a.get("claims")).stream().map(x -> (Map<?, ?>) x).filter(x -> x.get("id").equals("R-E-ULS-W-Fx"))
+                .findFirst().orElseThrow();
+        assertEquals("mismatch", e.get("status"));
+        assertEquals("10.00 kN", e.get("claimed"));
+        assertEquals("-10.02 kN", e.get("stiffness"));
+        assertEquals("3%", e.get("tolerance"));
+    }
+
+    @Test
+    void aClaimedZeroAgainstRoundingIsShownAgainstTheFloor() throws Exception {
+        // the footbridge truss's claimed Fx = 0 at its pinned support: the computed value is rounding (about 1e-13 kN),
+        // so its relative difference is 100 % in the JSON; the page, as the report, gives it in units against the floor
+        String model = "samples/footbridge-truss.yaml", claims = "samples/footbridge-truss-claims.yaml";
+        Map<String, Object> a = json(api("POST", "/api/check", Map.of("name", model, "text", Files.readString(Path.of(model)),
+                "claims", List.of(Map.of("name", claims, "text", Files.readString(Path.of(claims)))))));
+        Map<?, ?> fx = ((List<?>) a.get("claims")).stream().map(x -> (Map<?, ?>) x).filter(x -> x.get("quantity").toString().startsWith("Fx"))
+                .findFirst().orElseThrow();
+        assertEquals("ok", fx.get("status"));
+        assertEquals("0 kN", fx.get("difference"));
+        assertTrue(fx.get("tolerance").toString().endsWith("kN (floor)"), fx.toString());
     }
 
     @Test

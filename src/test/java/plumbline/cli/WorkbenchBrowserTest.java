@@ -62,7 +62,7 @@ class WorkbenchBrowserTest {
         o.setBinary(CHROMIUM);
         o.addArguments("--headless=new", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
                 "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-dev-shm-usage",
-                "--window-size=1400,1000", "--user-data-dir=" + profile);
+                "--window-size=1400,1250", "--user-data-dir=" + profile);
         Map<String, Object> prefs = new HashMap<>();
         prefs.put("download.default_directory", downloads.toString());
         prefs.put("download.prompt_for_download", false);
