@@ -74,7 +74,8 @@ public final class Checked {
             throw new Refused(List.of("plumbline: --method force: " + tooLarge
                     + "; use --method stiffness or both (nothing was written)"));
         }
-        Analysis a = Analysis.of(in.model(), engines(method, tooLarge == null));
+        List<Engine> engines = engines(method, tooLarge == null);
+        Analysis a = Analysis.of(in.model(), engines);
         List<String> notes = new ArrayList<>();
         if (method == Method.both && tooLarge != null) {
             notes.add("force method not run: " + tooLarge + "; the results are the stiffness method's alone, unconfirmed by a second method");
@@ -86,7 +87,10 @@ public final class Checked {
                     + "(try --method stiffness)");
             throw new Refused(lines);
         }
-        Review r = Review.of(a, new TolerancePolicy(toleranceRatio), new StiffnessEngine());
+        // the diagnosis re-solves variants of the model with the check's own stiffness engine, so a variant
+        // that changes only loads reuses the check's factorization
+        Engine variants = engines.stream().filter(e -> e instanceof StiffnessEngine).findFirst().orElseGet(StiffnessEngine::new);
+        Review r = Review.of(a, new TolerancePolicy(toleranceRatio), variants);
         for (var e : a.engines().values()) {
             if (e.declined()) notes.add(e.engine() + " method not run: " + e.instability() + "; the results are the other method's alone");
         }

@@ -6,6 +6,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicReference;
 import plumbline.linalg.NodeOrdering;
 import plumbline.linalg.SkylineLdl;
 import plumbline.linalg.SkylineMatrix;
@@ -56,6 +58,22 @@ public final class StiffnessEngine implements Engine {
 
     private final MemberLoading loading;
     private final MemberFunctions functions;
+    /**
+     * The last factorization with what the run said of it: a model of the same structure (the
+     * same nodes, members, sections, materials and supports; the diagnosis's variants that
+     * change only loads) is solved with it again instead of factoring K_ff anew.
+     */
+    private final AtomicReference<Reusable> last = new AtomicReference<>();
+
+    private record Reusable(Factored factored, List<String> notes, List<EngineWarning> warnings) {
+    }
+
+    /** How many times this engine has factored K_ff (for the test that shows a load variant reuses it). */
+    private final AtomicInteger factorizations = new AtomicInteger();
+
+    int factorizations() {
+        return factorizations.get();
+    }
 
     /** The engine as the tool runs it: the shared member loads and member functions. */
     public StiffnessEngine() {
@@ -91,6 +109,30 @@ public final class StiffnessEngine implements Engine {
 
     @Override
     public EngineResult solve(Model model) {
+        Reusable r = last.get();
+        if (r != null && sameStructure(r.factored().model(), model)) {
+            return cases(r.factored().withModel(model), r.notes(), r.warnings());
+        }
+        return factorAndSolve(model);
+    }
+
+    /** Whether two models have the same stiffness: everything but their loads, combinations and claims alike. */
+    static boolean sameStructure(Model a, Model b) {
+        return a == b || (a.nodes().equals(b.nodes()) && a.members().equals(b.members()) && a.sections().equals(b.sections())
+                && a.materials().equals(b.materials()) && a.supports().equals(b.supports()));
+    }
+
+    private EngineResult cases(Factored kf, List<String> notes, List<EngineWarning> warnings) {
+        Model model = kf.model();
+        Map<String, Solution> cases = new LinkedHashMap<>();
+        // the load cases share the factorization and nothing else: solved side by side, gathered in order
+        List<Solution> solved = model.loadCases().parallelStream().map(kf::solve).toList();
+        for (int i = 0; i < solved.size(); i++) cases.put(model.loadCases().get(i).name(), solved.get(i));
+        return new EngineResult(name(), true, null, cases, notes, warnings, false, null);
+    }
+
+    private EngineResult factorAndSolve(Model model) {
+        factorizations.incrementAndGet();
         List<Node> nodes = new ArrayList<>(model.nodes().values());
         Map<String, Integer> index = new HashMap<>();
         for (int k = 0; k < nodes.size(); k++) index.put(nodes.get(k).name(), k);
@@ -179,12 +221,9 @@ public final class StiffnessEngine implements Engine {
                     + "members there: %s", where, k.smallestPivotRatio(), (int) Math.round(-Math.log10(k.smallestPivotRatio())),
                     String.join(", ", at2))));
         }
-        Map<String, Solution> cases = new LinkedHashMap<>();
         Factored kf = new Factored(model, nodes, index, dof, fixed, free, List.copyOf(elements), frameAngle, k, loading, functions);
-        // the load cases share the factorization and nothing else: solved side by side, gathered in order
-        List<Solution> solved = model.loadCases().parallelStream().map(kf::solve).toList();
-        for (int i = 0; i < solved.size(); i++) cases.put(model.loadCases().get(i).name(), solved.get(i));
-        return new EngineResult(name(), true, null, cases, notes, warnings, false, null);
+        last.set(new Reusable(kf, List.copyOf(notes), List.copyOf(warnings)));
+        return cases(kf, notes, warnings);
     }
 
     /**
@@ -196,6 +235,11 @@ public final class StiffnessEngine implements Engine {
     private record Factored(Model model, List<Node> nodes, Map<String, Integer> index, int[][] dof, boolean[][] fixed,
                             int free, List<Element> elements, double[] frameAngle, SkylineLdl k,
                             MemberLoading loading, MemberFunctions functions) {
+
+        /** The same factorization for a model of the same structure with other loads. */
+        Factored withModel(Model other) {
+            return new Factored(other, nodes, index, dof, fixed, free, elements, frameAngle, k, loading, functions);
+        }
 
         Solution solve(LoadCase c) {
             int nn = nodes.size();
