@@ -1,6 +1,5 @@
 package plumbline.cli;
 
-import java.nio.file.Path;
 import java.util.List;
 import plumbline.run.Method;
 import java.util.concurrent.Callable;

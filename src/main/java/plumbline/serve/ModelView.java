@@ -100,10 +100,19 @@ final class ModelView {
                     "label", String.join(", ", parts), "line", n.at().line()));
         }
         for (Settlement s : c.settlements()) {
-            loads.add(map("kind", "note", "node", s.node(), "label", "settlement", "line", s.at().line()));
+            List<String> parts = new ArrayList<>();
+            String[] names = {"ux", "uy", "rz"};
+            double[] values = {s.uxM(), s.uyM(), s.rzRad()};
+            for (int d = 0; d < 3; d++) {
+                if (Double.isNaN(values[d])) continue;
+                parts.add(names[d] + " " + (d < 2 ? Console.fmt(len(u, values[d])) + " " + u.length().symbol() : Console.fmt(values[d]) + " rad"));
+            }
+            loads.add(map("kind", "note", "node", s.node(), "label", "settlement " + String.join(", ", parts), "line", s.at().line()));
         }
         for (Temperature t : c.temperatures()) {
-            loads.add(map("kind", "note", "member", t.member(), "label", "temperature", "line", t.at().line()));
+            // temperature differences: kelvin and degrees Celsius are the same size
+            loads.add(map("kind", "note", "member", t.member(), "label", "temperature: uniform " + Console.fmt(t.uniformK())
+                    + " degC, gradient " + Console.fmt(t.gradientK()) + " degC", "line", t.at().line()));
         }
         return map("name", c.name(), "type", c.type(), "pattern", c.pattern(), "selfWeight", c.selfWeight(), "loads", loads);
     }

@@ -156,6 +156,17 @@ class WorkbenchApiTest {
     }
 
     @Test
+    void settlementsAndTemperaturesAreLabelledWithTheirValues() throws Exception {
+        // check cases 14 and 15: B settles 10 mm, written in mm in a file in metres; M1 warms 25 degC with a 10 degC gradient
+        for (String[] c : new String[][]{{"checks/14-fixed-beam-settlement.yaml", "settlement uy -0.01000 m"},
+                {"checks/15-fixed-beam-temperature.yaml", "temperature: uniform 25.00 degC, gradient 10.00 degC"}}) {
+            Map<String, Object> a = json(api("POST", "/api/model", Map.of("name", "c.yaml", "text", Files.readString(Path.of(c[0])))));
+            String loads = ((Map<?, ?>) ((List<?>) ((Map<?, ?>) a.get("view")).get("cases")).get(0)).get("loads").toString();
+            assertTrue(loads.contains(c[1]), loads);
+        }
+    }
+
+    @Test
     void theCheckServesWhatTheCommandLineWrites(@TempDir Path out) throws Exception {
         String model = "samples/portal-frame.yaml", claims = "samples/portal-frame-claims.yaml";
         Map<String, Object> a = json(api("POST", "/api/check", Map.of("name", model, "text", Files.readString(Path.of(model)),
