@@ -883,6 +883,11 @@ $('check').addEventListener('click', async () => {
   const b = $('check');
   b.disabled = true;
   say('Checking…');
+  // nothing of an earlier check stays on the page while this one runs or if it fails
+  state.run = null;
+  state.results = null;
+  for (const id of ['results', 'explanations', 'diagrams', 'console', 'diagram-set']) $(id).textContent = '';
+  draw();
   try {
     const a = await api('POST', '/api/check', {name: $('model-name').value, text: text.value, claims: claimsSources(), tolerance: $('tolerance').value});
     state.run = a;
@@ -901,7 +906,7 @@ $('check').addEventListener('click', async () => {
       showResults(a);
       say('Checked: ' + state.results.verdict.toUpperCase(), a.exit !== 0);
     }
-    showTab('lower', a.status === 'checked' ? 'results' : 'results');
+    showTab('lower', 'results');
     draw();
   } catch (e) {
     say(e.message, true);
