@@ -206,6 +206,16 @@ class WorkbenchBrowserTest {
         assertEquals(1, cli.code(), cli.err());
         assertArrayEquals(Files.readAllBytes(out.resolve("r.json")), Files.readAllBytes(downloads.resolve("portal-frame-results.json")));
         assertEquals(ReportPagesTest.pages(out.resolve("r.pdf")), ReportPagesTest.pages(downloads.resolve("portal-frame-report.pdf")));
+
+        // a claim naming a node the model lacks: the check refuses the input, and nothing of the earlier check stays
+        js("const dt = new DataTransfer(); dt.setData('text/plain', arguments[0]);"
+                + "document.querySelector('#claims input').dispatchEvent(new ClipboardEvent('paste', {clipboardData: dt, bubbles: true, cancelable: true}));",
+                "reaction\tULS-W\tQ\tFy\t3\tkN\n");
+        browser.findElement(By.id("check")).click();
+        wait.until(d -> d.findElement(By.id("results")).getText().contains("Input problems"));
+        assertTrue(browser.findElement(By.id("results")).getText().contains("claims.csv:6:"), browser.findElement(By.id("results")).getText());
+        assertEquals(0, browser.findElements(By.cssSelector("#drawing .flagged")).size(), "no flag of the earlier check");
+        assertEquals(0, browser.findElements(By.cssSelector("#diagrams img, #discrepancies, #download-pdf")).size());
     }
 
     @Test
