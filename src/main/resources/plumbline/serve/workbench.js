@@ -67,7 +67,15 @@ function showTab(group, tab) {
 const text = $('model-text');
 let validateTimer = null;
 
+// Until the changed text has been read, no message about the earlier text stands
+function markPending() {
+  const list = $('messages');
+  list.textContent = '';
+  list.append(el('li', {class: 'fine pending'}, 'Reading the model…'));
+}
+
 text.addEventListener('input', () => {
+  markPending();
   drawGutter([]);
   clearTimeout(validateTimer);
   validateTimer = setTimeout(validate, 300);
@@ -187,6 +195,7 @@ function yamlValue(v, key) {
 }
 
 function setText(t, note) {
+  markPending();
   const top = text.scrollTop;
   text.value = t;
   text.scrollTop = top;
@@ -851,6 +860,7 @@ $('open-file').addEventListener('change', async ev => {
     } else {
       $('model-name').value = name;
       text.value = a.text;
+      markPending();
       drawGutter([]);
       say('Opened ' + name);
       validate();

@@ -237,9 +237,11 @@ class WorkbenchBrowserTest {
         WebElement x = browser.findElement(By.cssSelector("table[data-section=nodes] tr[data-name=B] td:nth-child(2) input"));
         x.sendKeys(Keys.chord(Keys.CONTROL, "a"), "8", Keys.TAB);
         wait.until(d -> text().contains("\"B\": [8, 0]"));
+        wait.until(d -> messages().contains("reads without problems")); // the tables drawn again from the edited text
         WebElement key = browser.findElement(By.cssSelector("table[data-section=sections] tr[data-name=B1] td:nth-child(1) input"));
         key.sendKeys(Keys.chord(Keys.CONTROL, "a"), "Beam 1", Keys.TAB);
         wait.until(d -> text().contains("\"Beam 1\": {"));
+        wait.until(d -> !messages().contains("Reading the model")); // read (with a problem until M1 names the section)
         WebElement section = browser.findElement(By.cssSelector("table[data-section=members] tr[data-name=M1] td:nth-child(4) input"));
         section.sendKeys(Keys.chord(Keys.CONTROL, "a"), "Beam 1", Keys.TAB);
         wait.until(d -> text().contains("\"section\": \"Beam 1\"}"));
