@@ -124,7 +124,8 @@ public final class Diagrams {
         for (Member mem : m.members().values()) {
             if (!r.patterned()) {
                 Piecewise p = function(r.representative().members().get(mem.name()), kind);
-                peak = Math.max(peak, Math.max(Math.abs(p.max().value()), Math.abs(p.min().value())));
+                Piecewise.Extreme[] e = p.range(); // {max, min}, found together
+                peak = Math.max(peak, Math.max(Math.abs(e[0].value()), Math.abs(e[1].value())));
             } else {
                 for (List<double[]> c : curves.get(mem.name())) for (double[] s : c) peak = Math.max(peak, Math.abs(s[1]));
             }
@@ -247,7 +248,8 @@ public final class Diagrams {
         double[][] ext; // {x, value}
         if (!r.patterned()) {
             Piecewise p = function(r.representative().members().get(mem.name()), kind);
-            ext = new double[][]{{p.max().xM(), p.max().value()}, {p.min().xM(), p.min().value()}};
+            Piecewise.Extreme[] e = p.range(); // {max, min}, found together
+            ext = new double[][]{{e[0].xM(), e[0].value()}, {e[1].xM(), e[1].value()}};
         } else if (kind == Kind.DEFLECTION) {
             double[] hi = {0, Double.NEGATIVE_INFINITY}, lo = {0, Double.POSITIVE_INFINITY};
             for (double[] s : curves.get(0)) if (s[1] > hi[1]) hi = s;
@@ -369,7 +371,8 @@ public final class Diagrams {
         for (MemberSolution ms : s.members().values()) {
             force = Math.max(force, Math.max(ms.peaks().value(Quantity.N_ABS), ms.peaks().value(Quantity.V_ABS)));
             Piecewise p = function(ms, kind);
-            peak = Math.max(peak, Math.max(Math.abs(p.max().value()), Math.abs(p.min().value())));
+            Piecewise.Extreme[] e = p.range(); // {max, min}, found together
+            peak = Math.max(peak, Math.max(Math.abs(e[0].value()), Math.abs(e[1].value())));
         }
         double scale = kind == Kind.MOMENT ? force * m.extentM() : force;
         return peak <= 1e-9 * scale;
