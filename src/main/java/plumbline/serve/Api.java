@@ -32,16 +32,6 @@ final class Api {
     /** Checks kept for download; older ones are dropped (each holds a solved model). */
     static final int RUNS_KEPT = 8;
 
-    /** A request the page made that cannot be answered, with the HTTP status and words for the page. */
-    static final class Refused extends Exception {
-        final int status;
-
-        Refused(int status, String message) {
-            super(message);
-            this.status = status;
-        }
-    }
-
     /** One check: its outputs, made once and kept. */
     static final class CheckRun {
         final Checked checked;
@@ -97,21 +87,15 @@ final class Api {
         try {
             byte[] bytes = folder.read(name);
             return ModelView.map("name", name, "text", ModelReader.decode(name, bytes));
-        } catch (Folder.Refused e) {
-            throw new Refused(e.status, e.getMessage());
         } catch (InputException e) {
             throw new Refused(422, e.problems().get(0).toString());
         }
     }
 
     Map<String, Object> save(String name, String text, boolean replace) throws Refused {
-        try {
-            byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
-            folder.write(name, bytes, replace);
-            return ModelView.map("saved", name, "bytes", bytes.length);
-        } catch (Folder.Refused e) {
-            throw new Refused(e.status, e.getMessage());
-        }
+        byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
+        folder.write(name, bytes, replace);
+        return ModelView.map("saved", name, "bytes", bytes.length);
     }
 
     /**

@@ -27,16 +27,6 @@ final class Folder {
     /** Files listed at most (a folder of thousands is not a calc package). */
     static final int MAX_LISTED = 500;
 
-    /** A refused name or a failed file operation, in words for the page. */
-    static final class Refused extends Exception {
-        final int status;
-
-        Refused(int status, String message) {
-            super(message);
-            this.status = status;
-        }
-    }
-
     /** One file that may be opened: its name relative to the folder, and size. */
     record Entry(String name, long bytes) {
     }

@@ -120,7 +120,7 @@ public final class Workbench implements AutoCloseable {
             }
             try {
                 route(ex, path, query);
-            } catch (Api.Refused e) {
+            } catch (Refused e) {
                 error(ex, e.status, e.getMessage());
             } catch (TooLarge e) {
                 error(ex, 413, e.getMessage());
@@ -136,17 +136,17 @@ public final class Workbench implements AutoCloseable {
         }
     }
 
-    private void route(HttpExchange ex, String path, Map<String, String> q) throws IOException, Api.Refused, TooLarge {
+    private void route(HttpExchange ex, String path, Map<String, String> q) throws IOException, Refused, TooLarge {
         String method = ex.getRequestMethod();
         if (method.equals("GET") && ASSETS.containsKey(path)) {
             String file = path.equals("/") ? "/index.html" : path;
             try (InputStream in = Workbench.class.getResourceAsStream("/plumbline/serve" + file)) {
-                if (in == null) throw new Api.Refused(500, "the page's file " + file + " is missing from the jar");
+                if (in == null) throw new Refused(500, "the page's file " + file + " is missing from the jar");
                 send(ex, 200, ASSETS.get(path), in.readAllBytes(), null);
             }
             return;
         }
-        if (!path.startsWith("/api/")) throw new Api.Refused(404, "no page " + path);
+        if (!path.startsWith("/api/")) throw new Refused(404, "no page " + path);
         String[] parts = path.substring(5).split("/");
         switch (method + " " + parts[0]) {
             case "GET files" -> json(ex, api.files());
@@ -166,19 +166,19 @@ public final class Workbench implements AutoCloseable {
             case "POST check" -> {
                 Map<String, Object> body = body(ex);
                 Object listed = body.get("claims");
-                if (listed != null && !(listed instanceof List<?>)) throw new Api.Refused(400, "'claims' is a list of {name, text}");
+                if (listed != null && !(listed instanceof List<?>)) throw new Refused(400, "'claims' is a list of {name, text}");
                 List<?> claims = listed == null ? List.of() : (List<?>) listed;
                 Object tol = body.get("tolerance");
                 json(ex, api.check(text(body, "name"), text(body, "text"), claims, tol == null ? "" : String.valueOf(tol)));
             }
             case "GET run" -> runFile(ex, parts, q);
-            default -> throw new Api.Refused(404, "no API " + method + " " + path);
+            default -> throw new Refused(404, "no API " + method + " " + path);
         }
     }
 
     /** /api/run/ID/results.json, /api/run/ID/report.pdf, /api/run/ID/figures?set=S, /api/run/ID/figure/FILE?set=S */
-    private void runFile(HttpExchange ex, String[] parts, Map<String, String> q) throws IOException, Api.Refused {
-        if (parts.length < 3) throw new Api.Refused(404, "no such check file");
+    private void runFile(HttpExchange ex, String[] parts, Map<String, String> q) throws IOException, Refused {
+        if (parts.length < 3) throw new Refused(404, "no such check file");
         Api.CheckRun r = api.run(parts[1]);
         boolean download = "1".equals(q.get("download"));
         switch (parts[2]) {
@@ -188,20 +188,20 @@ public final class Workbench implements AutoCloseable {
             case "figures" -> json(ex, ModelView.map("files", List.copyOf(r.figures(q.getOrDefault("set", "")).keySet())));
             case "figure" -> {
                 byte[] png = parts.length > 3 ? r.figures(q.getOrDefault("set", "")).get(parts[3]) : null;
-                if (png == null) throw new Api.Refused(404, "no such figure");
+                if (png == null) throw new Refused(404, "no such figure");
                 send(ex, 200, "image/png", png, null);
             }
-            default -> throw new Api.Refused(404, "no such check file");
+            default -> throw new Refused(404, "no such check file");
         }
     }
 
-    private static String text(Map<String, Object> body, String key) throws Api.Refused {
+    private static String text(Map<String, Object> body, String key) throws Refused {
         Object v = body.get(key);
-        if (!(v instanceof String s)) throw new Api.Refused(400, "the request lacks '" + key + "'");
+        if (!(v instanceof String s)) throw new Refused(400, "the request lacks '" + key + "'");
         return s;
     }
 
-    private static Map<String, Object> body(HttpExchange ex) throws IOException, Api.Refused, TooLarge {
+    private static Map<String, Object> body(HttpExchange ex) throws IOException, Refused, TooLarge {
         ByteArrayOutputStream b = new ByteArrayOutputStream();
         try (InputStream in = ex.getRequestBody()) {
             byte[] buf = new byte[65536];
@@ -214,7 +214,7 @@ public final class Workbench implements AutoCloseable {
         try {
             return OutputFiles.parseJson(b.toString(StandardCharsets.UTF_8));
         } catch (IOException | RuntimeException e) {
-            throw new Api.Refused(400, "the request is not a JSON object");
+            throw new Refused(400, "the request is not a JSON object");
         }
     }
 
