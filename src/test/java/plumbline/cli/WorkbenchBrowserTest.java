@@ -252,6 +252,16 @@ class WorkbenchBrowserTest {
         browser.findElement(By.cssSelector("table[data-section=supports] tr[data-name=B] button")).click();
         assertTrue(browser.findElement(By.id("status")).getText().contains("JSON"), browser.findElement(By.id("status")).getText());
         assertEquals(before, text());
+
+        // the text moves under the tables before it is read again (a line added above): a cell edit then
+        // changes nothing, rather than writing its value where the table last saw it
+        js("const t = document.getElementById('model-text'); t.value = '\\n' + t.value;");
+        String moved = text();
+        WebElement y = browser.findElement(By.cssSelector("table[data-section=nodes] tr[data-name=A] td:nth-child(3) input"));
+        y.sendKeys(Keys.chord(Keys.CONTROL, "a"), "2", Keys.TAB);
+        assertTrue(browser.findElement(By.id("status")).getText().contains("The text changed under this table"),
+                browser.findElement(By.id("status")).getText());
+        assertEquals(moved, text());
     }
 
     String text() {
