@@ -161,7 +161,11 @@ public final class ModelReader {
     }
 
     public static Model read(String file, String text, boolean yaml) throws InputException {
-        Tree root = TreeReader.read(file, text, yaml);
+        return fromTree(file, TreeReader.read(file, text, yaml));
+    }
+
+    /** The model a document read as a located tree describes. */
+    static Model fromTree(String file, Tree root) throws InputException {
         ModelReader r = new ModelReader(file);
         Model m = r.model(root);
         if (!r.problems.isEmpty() || m == null) throw new InputException(r.problems);

@@ -5,6 +5,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import plumbline.model.InputException;
+import plumbline.model.Model;
+import plumbline.model.Problem;
 
 /**
  * A YAML or JSON document's values with the line and column each is written at, as plain
@@ -18,9 +20,28 @@ public final class Outline {
     private Outline() {
     }
 
-    /** The outline of a document, or the syntax problem that stops it being read. */
-    public static Map<String, Object> of(String name, String text) throws InputException {
-        return outline(TreeReader.read(name, text, ModelReader.isYaml(name)));
+    /**
+     * A model's text read once for both uses: its outline (null when the text does not read as
+     * YAML or JSON), the model (null when it has problems) and the problems found.
+     */
+    public record Reading(Map<String, Object> outline, Model model, List<Problem> problems) {
+        public Reading {
+            problems = List.copyOf(problems);
+        }
+    }
+
+    public static Reading model(String name, String text) {
+        Tree root;
+        try {
+            root = TreeReader.read(name, text, ModelReader.isYaml(name));
+        } catch (InputException e) {
+            return new Reading(null, null, e.problems());
+        }
+        try {
+            return new Reading(outline(root), ModelReader.fromTree(name, root), List.of());
+        } catch (InputException e) {
+            return new Reading(outline(root), null, e.problems());
+        }
     }
 
     private static Map<String, Object> outline(Tree t) {

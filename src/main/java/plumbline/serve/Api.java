@@ -103,25 +103,17 @@ final class Api {
      * outline of the text for the tables, and the drawing's view when the model reads.
      */
     Map<String, Object> model(String name, String text) {
+        // the text is parsed once for the tables' outline and the model
+        Outline.Reading read = Outline.model(name, text);
+        List<Problem> problems = new ArrayList<>(read.problems());
+        Object view = null;
+        if (read.model() != null) {
+            problems.addAll(StructureCheck.check(read.model()));
+            if (problems.isEmpty()) view = ModelView.of(read.model());
+        }
         Map<String, Object> out = new LinkedHashMap<>();
-        List<Problem> problems = new ArrayList<>();
-        Object outline = null, view = null;
-        try {
-            outline = Outline.of(name, text);
-        } catch (InputException e) {
-            problems.addAll(e.problems());
-        }
-        if (problems.isEmpty()) {
-            try {
-                Model m = ModelReader.read(name, text.getBytes(StandardCharsets.UTF_8));
-                problems.addAll(StructureCheck.check(m));
-                if (problems.isEmpty()) view = ModelView.of(m);
-            } catch (InputException e) {
-                problems.addAll(e.problems());
-            }
-        }
         out.put("problems", problems(problems));
-        out.put("outline", outline);
+        out.put("outline", read.outline());
         out.put("view", view);
         return out;
     }
