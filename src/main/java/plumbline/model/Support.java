@@ -1,5 +1,7 @@
 package plumbline.model;
 
+import java.util.Objects;
+
 /**
  * Restraint of one node. The restraint axes of ux and uy are the global axes turned
  * counter-clockwise by {@code angleRad} (an inclined roller restrains uy of those axes).
@@ -19,5 +21,37 @@ public record Support(String node, boolean fixUx, boolean fixUy, boolean fixRz, 
     /** Restrained or sprung in direction dof (0 ux, 1 uy, 2 rz): a reaction component exists. */
     public boolean reacts(int dof) {
         return fixed(dof) || spring(dof) > 0;
+    }
+
+    // equals and hashCode written out as the record would make them (every component, doubles
+    // by Double.compare): the generated ones are linked through method handles the first time
+    // they run, some milliseconds of a short run's start each (RecordEqualityTest holds them to
+    // every component)
+    @Override
+    public boolean equals(Object o) {
+        return o == this || o instanceof Support x
+                && Objects.equals(node, x.node)
+                && fixUx == x.fixUx
+                && fixUy == x.fixUy
+                && fixRz == x.fixRz
+                && Double.compare(angleRad, x.angleRad) == 0
+                && Double.compare(springUxNPerM, x.springUxNPerM) == 0
+                && Double.compare(springUyNPerM, x.springUyNPerM) == 0
+                && Double.compare(springRzNmPerRad, x.springRzNmPerRad) == 0
+                && Objects.equals(at, x.at);
+    }
+
+    @Override
+    public int hashCode() {
+        int h = Objects.hashCode(node);
+        h = 31 * h + Boolean.hashCode(fixUx);
+        h = 31 * h + Boolean.hashCode(fixUy);
+        h = 31 * h + Boolean.hashCode(fixRz);
+        h = 31 * h + Double.hashCode(angleRad);
+        h = 31 * h + Double.hashCode(springUxNPerM);
+        h = 31 * h + Double.hashCode(springUyNPerM);
+        h = 31 * h + Double.hashCode(springRzNmPerRad);
+        h = 31 * h + Objects.hashCode(at);
+        return h;
     }
 }

@@ -24,6 +24,20 @@ public record Dimension(int force, int length, int temperature, int angle) {
     /** Rotational spring stiffness, moment per radian. */
     public static final Dimension ROTATIONAL_STIFFNESS = new Dimension(1, 1, 0, -1);
 
+    // equals and hashCode written out as the record would make them: the generated ones are
+    // linked through method handles the first time they run, some milliseconds of a short
+    // run's start each (RecordEqualityTest holds them to every component)
+    @Override
+    public boolean equals(Object o) {
+        return o == this || o instanceof Dimension d && force == d.force && length == d.length && temperature == d.temperature
+                && angle == d.angle;
+    }
+
+    @Override
+    public int hashCode() {
+        return ((force * 31 + length) * 31 + temperature) * 31 + angle;
+    }
+
     public Dimension times(Dimension o) {
         return new Dimension(force + o.force, length + o.length, temperature + o.temperature, angle + o.angle);
     }
