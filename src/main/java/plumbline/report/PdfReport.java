@@ -9,8 +9,8 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import com.lowagie.text.Chunk;
 import com.lowagie.text.Document;
+import com.lowagie.text.Chunk;
 import com.lowagie.text.DocumentException;
 import com.lowagie.text.PageSize;
 import com.lowagie.text.Paragraph;
@@ -170,9 +170,9 @@ public final class PdfReport {
     private void summary() throws DocumentException {
         kit.heading("Summary");
         long ok = count(ClaimResult.Status.OK), mg = count(ClaimResult.Status.MARGINAL), mm = count(ClaimResult.Status.MISMATCH);
-        Paragraph v = new Paragraph();
-        v.add(PdfKit.phrase("Verdict: " + review.verdict().word.toUpperCase(Locale.ROOT), PdfKit.Style.VERDICT));
-        v.add(new Chunk("      "));
+        // the paragraph takes the first phrase's font, which its spacing is set in (no other font referenced)
+        Paragraph v = new Paragraph(PdfKit.phrase("Verdict: " + review.verdict().word.toUpperCase(Locale.ROOT), PdfKit.Style.VERDICT));
+        v.add(new Chunk("      ", PdfKit.phrase(" ", BODY).getFont()));
         v.add(PdfKit.phrase(String.format(Locale.ROOT, "%d claims: %d ok, %d marginal, %d mismatch", ok + mg + mm, ok, mg, mm), BODY));
         v.setSpacingAfter(2);
         kit.doc.add(v);

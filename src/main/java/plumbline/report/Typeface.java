@@ -79,12 +79,13 @@ public final class Typeface {
     }
 
     /**
-     * Reads the fonts and starts Java2D's text machinery (a few tenths of a second) so that a
+     * Reads the fonts, the calendar and Java2D's text machinery (a few tenths of a second) so that a
      * run can do it on another core while it solves; the report then finds them ready.
      */
     public static void warmUp() {
         pdf(false);
         pdf(true);
+        new com.lowagie.text.pdf.PdfDate(); // the calendar and locale data every PDF's creation date needs
         java.awt.image.BufferedImage img = new java.awt.image.BufferedImage(8, 8, java.awt.image.BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
@@ -133,7 +134,9 @@ public final class Typeface {
         FontSelector selector = new FontSelector();
         selector.addFont(main);
         selector.addFont(new com.lowagie.text.Font(PdfCjk.FONT, size, com.lowagie.text.Font.NORMAL, color));
-        return selector.process(printable(text));
+        Phrase p = selector.process(printable(text));
+        p.setFont(main); // the phrase's own font (spacing, an empty line) in the report's face too
+        return p;
     }
 
     /** The width in points of text set in the report's regular face (a CJK character counted one em wide). */

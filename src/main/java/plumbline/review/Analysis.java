@@ -13,6 +13,7 @@ import plumbline.model.Model;
 import plumbline.solve.Engine;
 import plumbline.solve.EngineResult;
 import plumbline.solve.MemberFunctions;
+import plumbline.solve.SideBySide;
 import plumbline.solve.Solution;
 import plumbline.solve.Superposition;
 import plumbline.statics.Determinacy;
@@ -64,13 +65,16 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
     public static Analysis of(Model model, List<Engine> engines) {
         List<LoadSet> sets = loadSets(model);
         Model em = engineModel(model);
-        // the statics (determinacy and stability) on one core while the engines start on the other;
-        // on an unstable model the engines' work is discarded, as if they had not run
-        CompletableFuture<Determinacy.Result> statics = CompletableFuture.supplyAsync(() -> Determinacy.of(model));
+        int members = model.members().size();
+        boolean parallel = SideBySide.worth(members, sets.size());
+        // the statics (determinacy and stability) on one core while the engines start on the other
+        // (on a large model); on an unstable model the engines' work is discarded, as if they had not run
+        CompletableFuture<Determinacy.Result> statics = parallel ? CompletableFuture.supplyAsync(() -> Determinacy.of(model))
+                : CompletableFuture.completedFuture(Determinacy.of(model));
         // the engines, and the load sets of each, are independent of one another (pure functions of the
         // model): they run side by side on the machine's cores and are gathered back in their order, so
         // every number is the same as in one thread
-        List<Object> attempts = engines.parallelStream().map(e -> {
+        List<Object> attempts = SideBySide.stream(engines, parallel).map(e -> {
             try {
                 return (Object) e.solve(em);
             } catch (RuntimeException ex) {
@@ -91,7 +95,7 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
                 EngineResult r = solved.get(i);
                 results.put(e.name(), r);
                 if (!r.stable()) continue;
-                List<LoadSetResult> rs = sets.parallelStream().map(s -> result(model, em, r, s, e.memberFunctions())).toList();
+                List<LoadSetResult> rs = SideBySide.stream(sets, members).map(s -> result(model, em, r, s, e.memberFunctions())).toList();
                 Map<String, LoadSetResult> byName = new LinkedHashMap<>();
                 for (int k = 0; k < sets.size(); k++) byName.put(sets.get(k).name(), rs.get(k));
                 sols.put(e.name(), byName);

@@ -46,14 +46,15 @@ class ArchitectureTest {
 
     /**
      * The shared classes of plumbline.solve each engine may name, exactly: the result types,
-     * the member loads and the seams, and the equilibrium check. Neither engine names the
+     * the member loads and the seams, the equilibrium check, and for the stiffness method the
+     * choice of running its load cases side by side (scheduling, no mechanics). Neither engine names the
      * shared member functions' code (MemberResponse, Poly, Piecewise beyond its value record
      * Extreme) by itself: the stiffness method takes them through MemberFunctions.SHARED, the
      * force method writes its own (ClosedFormMember).
      */
     static final Map<String, Set<String>> SHARED_BY_ENGINE = Map.of(
             "stiffness", Set.of("Engine", "EngineResult", "EngineWarning", "Equilibrium", "MemberActions", "MemberFunctions", "MemberLoading",
-                    "MemberSolution", "Solution"),
+                    "MemberSolution", "SideBySide", "Solution"),
             "force", Set.of("Engine", "EngineResult", "Equilibrium", "ForceWorking", "MemberActions", "MemberFunctions",
                     "MemberLoading", "MemberSolution", "Peaks", "Piecewise", "Solution"));
 

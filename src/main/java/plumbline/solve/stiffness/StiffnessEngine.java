@@ -27,6 +27,7 @@ import plumbline.solve.MemberActions;
 import plumbline.solve.MemberFunctions;
 import plumbline.solve.MemberLoading;
 import plumbline.solve.MemberSolution;
+import plumbline.solve.SideBySide;
 import plumbline.solve.Solution;
 
 /**
@@ -143,8 +144,9 @@ public final class StiffnessEngine implements Engine {
     private EngineResult cases(Factored kf, List<String> notes, List<EngineWarning> warnings) {
         Model model = kf.model();
         Map<String, Solution> cases = new LinkedHashMap<>();
-        // the load cases share the factorization and nothing else: solved side by side, gathered in order
-        List<Solution> solved = model.loadCases().parallelStream().map(kf::solve).toList();
+        // the load cases share the factorization and nothing else: solved side by side (on a large
+        // model), gathered in order
+        List<Solution> solved = SideBySide.stream(model.loadCases(), model.members().size()).map(kf::solve).toList();
         for (int i = 0; i < solved.size(); i++) cases.put(model.loadCases().get(i).name(), solved.get(i));
         return new EngineResult(name(), true, null, cases, notes, warnings, false, null);
     }
