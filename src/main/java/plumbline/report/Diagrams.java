@@ -72,6 +72,9 @@ public final class Diagrams {
     /** Samples per member piece for drawing (labels use the exact peaks). */
     private static final int SAMPLES = 24;
 
+    /** The deflected shape of a member is drawn as at least this many straight pieces, however short it is. */
+    private static final int DRAWN_SEGMENTS_AT_LEAST = 6;
+
     private static Piecewise function(MemberSolution ms, Kind k) {
         return switch (k) {
             case AXIAL -> ms.response().axial();
@@ -87,8 +90,10 @@ public final class Diagrams {
         if (!r.patterned()) {
             Piecewise p = function(r.representative().members().get(mem.name()), kind);
             for (int seg = 0; seg < p.segments(); seg++) {
-                for (int i = 0; i <= SAMPLES; i++) {
-                    double x = p.start(seg) + (p.end(seg) - p.start(seg)) * i / SAMPLES;
+                // a straight piece (no load along it) is drawn exactly by its two ends
+                int steps = p.piece(seg).degree() <= 1 ? 1 : SAMPLES;
+                for (int i = 0; i <= steps; i++) {
+                    double x = p.start(seg) + (p.end(seg) - p.start(seg)) * i / steps;
                     out.add(new double[]{x, p.piece(seg).at(x - p.start(seg))});
                 }
             }
@@ -334,12 +339,23 @@ public final class Diagrams {
         g.setColor(Ink.INK);
         g.setStroke(new BasicStroke(1.3f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
         for (double[][] line : lines) {
-            Path2D path = new Path2D.Double();
+            double[][] drawn = new double[line.length][];
+            double lengthPt = 0;
             for (int i = 0; i < line.length; i++) {
-                double sx = f.x(line[i][0]) + line[i][2] * k, sy = f.y(line[i][1]) - line[i][3] * k;
-                if (i == 0) path.moveTo(sx, sy);
-                else path.lineTo(sx, sy);
+                drawn[i] = new double[]{f.x(line[i][0]) + line[i][2] * k, f.y(line[i][1]) - line[i][3] * k};
+                if (i > 0) {
+                    double dx = drawn[i][0] - drawn[i - 1][0], dy = drawn[i][1] - drawn[i - 1][1];
+                    lengthPt += Math.sqrt(dx * dx + dy * dy);
+                }
             }
+            // drawn through every sample a point or less apart along the curve (all 61 on a member
+            // of 60 points or more; a few on the short members of a large model, where more would
+            // not show and would only slow the file); the largest is found on all of them above
+            int n = line.length - 1, every = Math.max(1, Math.min(n / DRAWN_SEGMENTS_AT_LEAST, (int) Math.floor(n / Math.max(lengthPt, 1e-9))));
+            Path2D path = new Path2D.Double();
+            path.moveTo(drawn[0][0], drawn[0][1]);
+            for (int i = every; i < n; i += every) path.lineTo(drawn[i][0], drawn[i][1]);
+            path.lineTo(drawn[n][0], drawn[n][1]);
             g.draw(path);
         }
         if (largest == 0) return "no displacement";

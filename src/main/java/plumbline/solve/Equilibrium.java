@@ -29,6 +29,9 @@ public final class Equilibrium {
     private Equilibrium() {
     }
 
+    /** The resultant of a member without loads (never written to). */
+    private static final double[] NO_LOAD = new double[3];
+
     /** Node loads of a load case or a factored set of cases, global {Fx, Fy, Mz} per node. */
     public static Map<String, double[]> nodeLoads(Model model, Map<String, Double> factors) {
         Map<String, double[]> out = new HashMap<>();
@@ -72,11 +75,13 @@ public final class Equilibrium {
             Node a = model.node(m.from()), b = model.node(m.to());
             double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
             double cx = dx / len, cy = dy / len;
-            double[] f = e.getValue().endForcesLocal();
+            MemberSolution f = e.getValue(); // its end forces read in place (no copy)
             // end forces on the member, local {fx, fy} turned to global {gx, gy} = {fx cx - fy cy, fx cy + fy cx}
-            double[] gi = {f[0] * cx - f[1] * cy, f[0] * cy + f[1] * cx, f[2]};
-            double[] gj = {f[3] * cx - f[4] * cy, f[3] * cy + f[4] * cx, f[5]};
-            double[] load = memberLoads.getOrDefault(m.name(), new double[3]);
+            double[] gi = {f.endForceLocal(0) * cx - f.endForceLocal(1) * cy, f.endForceLocal(0) * cy + f.endForceLocal(1) * cx,
+                    f.endForceLocal(2)};
+            double[] gj = {f.endForceLocal(3) * cx - f.endForceLocal(4) * cy, f.endForceLocal(3) * cy + f.endForceLocal(4) * cx,
+                    f.endForceLocal(5)};
+            double[] load = memberLoads.getOrDefault(m.name(), NO_LOAD);
             // the member balances: forces, and moments about its start (the end force acts at dx, dy)
             double rx = gi[0] + gj[0] + load[0], ry = gi[1] + gj[1] + load[1];
             double rm = gi[2] + gj[2] + dx * gj[1] - dy * gj[0] + load[2];

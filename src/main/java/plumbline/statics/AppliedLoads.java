@@ -60,8 +60,8 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
             double k = f.getValue();
             for (MemberLoad l : c.memberLoads()) {
                 Member m = model.member(l.member());
-                Node a = model.node(m.from()), b = model.node(m.to());
-                double len = model.lengthM(m), ex = model.directionOf(m)[0], ey = model.directionOf(m)[1];
+                double[] e = model.directionOf(m);
+                double ex = e[0], ey = e[1];
                 double[] r = out.computeIfAbsent(m.name(), x -> new double[4]);
                 if (l instanceof MemberLoad.Couple cp) {
                     r[2] += k * cp.momentNm();
