@@ -63,10 +63,13 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
     }
 
     public static Analysis of(Model model, List<Engine> engines) {
+        return of(model, engines, SideBySide.worth(model.members().size(), loadSets(model).size()));
+    }
+
+    /** The analysis with its pieces run side by side ({@code parallel}) or in the calling thread: the same numbers. */
+    static Analysis of(Model model, List<Engine> engines, boolean parallel) {
         List<LoadSet> sets = loadSets(model);
         Model em = engineModel(model);
-        int members = model.members().size();
-        boolean parallel = SideBySide.worth(members, sets.size());
         // the statics (determinacy and stability) on one core while the engines start on the other
         // (on a large model); on an unstable model the engines' work is discarded, as if they had not run
         CompletableFuture<Determinacy.Result> statics = parallel ? CompletableFuture.supplyAsync(() -> Determinacy.of(model))
@@ -95,7 +98,7 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
                 EngineResult r = solved.get(i);
                 results.put(e.name(), r);
                 if (!r.stable()) continue;
-                List<LoadSetResult> rs = SideBySide.stream(sets, members).map(s -> result(model, em, r, s, e.memberFunctions())).toList();
+                List<LoadSetResult> rs = SideBySide.stream(sets, parallel).map(s -> result(model, em, r, s, e.memberFunctions())).toList();
                 Map<String, LoadSetResult> byName = new LinkedHashMap<>();
                 for (int k = 0; k < sets.size(); k++) byName.put(sets.get(k).name(), rs.get(k));
                 sols.put(e.name(), byName);

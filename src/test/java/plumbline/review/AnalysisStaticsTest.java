@@ -1,5 +1,6 @@
 package plumbline.review;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -7,6 +8,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import plumbline.model.Quantity;
+import plumbline.solve.SideBySide;
 import plumbline.io.ModelReader;
 import plumbline.model.Model;
 import plumbline.solve.Engine;
@@ -47,9 +52,10 @@ class AnalysisStaticsTest {
         }
     };
 
-    @Test
-    void anUnstableModelKeepsNoEngineResult() throws Exception {
-        Analysis a = Analysis.of(beam("roller"), List.of(new StiffnessEngine(), FAILING));
+    @ParameterizedTest(name = "side by side: {0}")
+    @ValueSource(booleans = {false, true})
+    void anUnstableModelKeepsNoEngineResult(boolean sideBySide) throws Exception {
+        Analysis a = Analysis.of(beam("roller"), List.of(new StiffnessEngine(), FAILING), sideBySide);
         assertEquals(Determinacy.Classification.UNSTABLE, a.determinacy().classification());
         assertEquals(1, a.determinacy().mechanisms());
         assertTrue(a.engines().isEmpty(), "the engines' work on an unstable model is discarded: " + a.engines().keySet());
@@ -57,12 +63,52 @@ class AnalysisStaticsTest {
         assertFalse(a.stable());
     }
 
-    @Test
-    void onAStableModelAnEnginesFailureIsNotHidden() throws Exception {
-        Analysis a = Analysis.of(beam("pinned"), List.of(new StiffnessEngine()));
+    @ParameterizedTest(name = "side by side: {0}")
+    @ValueSource(booleans = {false, true})
+    void onAStableModelAnEnginesFailureIsNotHidden(boolean sideBySide) throws Exception {
+        Analysis a = Analysis.of(beam("pinned"), List.of(new StiffnessEngine()), sideBySide);
         assertEquals(30e3, a.engines().get("stiffness").cases().get("W").reactions().get("A")[1], 1e-9, "wL/2");
         IllegalStateException e = assertThrows(IllegalStateException.class,
-                () -> Analysis.of(beam("pinned"), List.of(new StiffnessEngine(), FAILING)));
+                () -> Analysis.of(beam("pinned"), List.of(new StiffnessEngine(), FAILING), sideBySide));
         assertEquals("planted engine failure", e.getMessage());
+    }
+
+    /**
+     * Side by side or in one thread, every number is the same: the portal-frame sample's
+     * reactions and every member peak of every load set, by both engines, compared exactly.
+     */
+    @Test
+    void sideBySideChangesNoNumber() throws Exception {
+        Model m = ModelReader.read(java.nio.file.Path.of("samples/portal-frame.yaml"));
+        List<Engine> engines = List.of(new StiffnessEngine(), new plumbline.solve.force.ForceEngine());
+        Analysis one = Analysis.of(m, engines, false), both = Analysis.of(m, engines, true);
+        assertEquals(one.solutions().keySet(), both.solutions().keySet());
+        int compared = 0;
+        for (var e : one.solutions().entrySet()) {
+            for (var s : e.getValue().entrySet()) {
+                LoadSetResult x = s.getValue(), y = both.solutions().get(e.getKey()).get(s.getKey());
+                for (var r : x.representative().reactions().entrySet()) {
+                    assertArrayEquals(r.getValue(), y.representative().reactions().get(r.getKey()), 0.0, s.getKey() + " " + r.getKey());
+                    compared++;
+                }
+                for (String member : m.members().keySet()) {
+                    for (Quantity q : Quantity.values()) {
+                        if (!q.isPeak()) continue;
+                        assertEquals(x.peak(member, q).value(), y.peak(member, q).value(), 0.0, s.getKey() + " " + member + " " + q);
+                        compared++;
+                    }
+                }
+            }
+        }
+        assertTrue(compared > 100, "compared " + compared);
+    }
+
+    @Test
+    void onlyWorkOfSomeSizeIsSpreadOverTheCores() {
+        assertFalse(SideBySide.worth(3, 4), "a sample: one thread");
+        assertTrue(SideBySide.worth(10_100, 13), "a 10,000-member frame: side by side");
+        assertFalse(SideBySide.worth(1_999, 1));
+        assertTrue(SideBySide.worth(2_000, 1));
+        assertTrue(SideBySide.worth(2_000, 0), "no pieces counts as one");
     }
 }
