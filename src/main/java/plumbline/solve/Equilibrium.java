@@ -56,6 +56,12 @@ public final class Equilibrium {
      * share, so a slip there shows as an imbalance rather than being balanced by both alike.
      */
     public static double residual(Model model, Solution s, Map<String, Double> factors) {
+        return residual(model, s.displacements(), s.reactions(), s.members(), factors);
+    }
+
+    /** The same, of a solution's parts before the solution is formed (a superposition forms it once, with its residual). */
+    static double residual(Model model, Map<String, double[]> displacements, Map<String, double[]> reactions,
+                           Map<String, MemberSolution> members, Map<String, Double> factors) {
         double lc = model.extentM();
         Map<String, double[]> memberLoads = AppliedLoads.memberResultants(model, factors);
         Map<String, double[]> sum = new HashMap<>();
@@ -65,12 +71,12 @@ public final class Equilibrium {
             for (int i = 0; i < 3; i++) a[i] += e.getValue()[i];
             scale = Math.max(scale, magnitude(e.getValue(), lc));
         }
-        for (var e : s.reactions().entrySet()) {
+        for (var e : reactions.entrySet()) {
             double[] a = sum.computeIfAbsent(e.getKey(), k -> new double[3]);
             for (int i = 0; i < 3; i++) a[i] += e.getValue()[i];
             scale = Math.max(scale, magnitude(e.getValue(), lc));
         }
-        for (var e : s.members().entrySet()) {
+        for (var e : members.entrySet()) {
             Member m = model.member(e.getKey());
             Node a = model.node(m.from()), b = model.node(m.to());
             double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
@@ -106,7 +112,7 @@ public final class Equilibrium {
         // largest displacement over the model's extent are rounding, not imbalance.
         double ea = 0, u = 0;
         for (Member m : model.members().values()) ea = Math.max(ea, model.axialStiffnessN(m));
-        for (double[] d : s.displacements().values()) u = Math.max(u, Math.hypot(d[0], d[1]));
+        for (double[] d : displacements.values()) u = Math.max(u, Math.hypot(d[0], d[1]));
         scale = Math.max(scale, Math.max(1e-12 * ea, 1e-5 * ea * u / lc));
         for (double[] a : sum.values()) worst = Math.max(worst, magnitude(a, lc));
         if (scale == 0) return worst == 0 ? 0 : 1;

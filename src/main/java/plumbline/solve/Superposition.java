@@ -1,6 +1,9 @@
 package plumbline.solve;
 
+import java.util.ArrayList;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import plumbline.model.Member;
 import plumbline.model.Model;
@@ -27,12 +30,19 @@ public final class Superposition {
             add(reac, p.getKey().reactions(), p.getValue());
         }
         Map<String, MemberSolution> members = new LinkedHashMap<>();
+        // each part's members are read in step with the model's (the engines list them in the model's
+        // order), looked up by name only where a part's order differs: a lookup in a map of thousands
+        // of members costs several cache misses, and a combination makes one per member and part
+        List<Map.Entry<Solution, Double>> partList = new ArrayList<>(parts.entrySet());
+        List<Iterator<Map.Entry<String, MemberSolution>>> inStep = new ArrayList<>();
+        for (var p : partList) inStep.add(p.getKey().members().entrySet().iterator());
         for (Member m : model.members().values()) {
             double[] f = new double[6];
             double vs = 0, ve = 0;
             MemberActions a = MemberActions.none(model.lengthM(m));
-            for (var p : parts.entrySet()) {
-                MemberSolution s = p.getKey().members().get(m.name());
+            for (int q = 0; q < partList.size(); q++) {
+                var p = partList.get(q);
+                MemberSolution s = inStep(inStep.get(q), m.name(), p.getKey());
                 double k = p.getValue();
                 for (int i = 0; i < 6; i++) f[i] += k * s.endForceLocal(i);
                 vs += k * s.vStartM();
@@ -43,9 +53,16 @@ public final class Superposition {
         }
         Map<String, Double> factors = new LinkedHashMap<>();
         for (var p : parts.entrySet()) factors.merge(p.getKey().name(), p.getValue(), Double::sum);
-        Solution s = new Solution(name, disp, reac, members, 0);
-        double residual = Equilibrium.residual(model, s, factors);
-        return new Solution(name, disp, reac, members, residual);
+        return new Solution(name, disp, reac, members, Equilibrium.residual(model, disp, reac, members, factors));
+    }
+
+    /** The part's next member when it is the one named (the usual case), else the part's member of that name. */
+    private static MemberSolution inStep(Iterator<Map.Entry<String, MemberSolution>> it, String name, Solution part) {
+        if (it.hasNext()) {
+            Map.Entry<String, MemberSolution> e = it.next();
+            if (e.getKey().equals(name)) return e.getValue();
+        }
+        return part.members().get(name);
     }
 
     private static void add(Map<String, double[]> into, Map<String, double[]> from, double k) {

@@ -118,6 +118,44 @@ class SuperpositionTest {
         }
     }
 
+    /**
+     * A superposition reads each part's members in step with the model's and looks a member
+     * up by name only where the part lists them in another order: a part listed backwards
+     * (and one missing a member's entry in step) gives the very same combination, to the bit.
+     */
+    @Test
+    void aPartListedInAnotherOrderGivesTheSameCombination() {
+        Model m = model();
+        EngineResult r = new StiffnessEngine().solve(m);
+        Solution d = r.cases().get("D"), e = r.cases().get("E");
+        Map<String, MemberSolution> backwards = new LinkedHashMap<>();
+        List<String> names = new java.util.ArrayList<>(d.members().keySet());
+        java.util.Collections.reverse(names);
+        for (String n : names) backwards.put(n, d.members().get(n));
+        Solution dBackwards = new Solution("D", d.displacements(), d.reactions(), backwards, d.equilibriumResidual());
+        Map<Solution, Double> inOrder = new LinkedHashMap<>(), outOfOrder = new LinkedHashMap<>();
+        inOrder.put(d, 1.5);
+        inOrder.put(e, -0.5);
+        outOfOrder.put(dBackwards, 1.5);
+        outOfOrder.put(e, -0.5);
+        Solution a = Superposition.combine(m, "C", inOrder, MemberFunctions.SHARED);
+        Solution b = Superposition.combine(m, "C", outOfOrder, MemberFunctions.SHARED);
+        assertEquals(List.copyOf(m.members().keySet()), List.copyOf(b.members().keySet()), "the combination lists the model's order");
+        for (String mem : m.members().keySet()) {
+            for (int i = 0; i < 6; i++) {
+                assertEquals(a.members().get(mem).endForceLocal(i), b.members().get(mem).endForceLocal(i), 0.0, mem + " end force " + i);
+            }
+            for (Quantity q : PEAKS) assertEquals(a.members().get(mem).peaks().value(q), b.members().get(mem).peaks().value(q), 0.0, mem + " " + q);
+        }
+        assertEquals(a.equilibriumResidual(), b.equilibriumResidual(), 0.0);
+        // and the combination is the one solved directly (so neither order is wrong the same way)
+        Solution direct = r.cases().get("F");
+        for (String mem : m.members().keySet()) {
+            assertEquals(direct.members().get(mem).endForceLocal(2), b.members().get(mem).endForceLocal(2),
+                    1e-9 * Math.max(1, Math.abs(direct.members().get(mem).endForceLocal(2))), mem);
+        }
+    }
+
     @Test
     void scalingAndAddingMemberActionsByHand() {
         MemberActions a = new MemberActions(6, List.of(new MemberActions.Linear(1, 3, 10, 20, 30, 40)),
