@@ -30,6 +30,35 @@ class MemberResponseTest {
         assertEquals(0.5193 * len, p.deflection().xM(), 1e-3 * len);
     }
 
+    /**
+     * A member solution forms its functions when first asked and keeps them; formed then they
+     * are the very functions formed at once, and the peaks it holds are theirs. Simple beam
+     * under a uniform load w (statics by hand): M at midspan wL^2/8, V at the ends +-wL/2.
+     */
+    @Test
+    void aMemberSolutionFormsItsFunctionsOnFirstUseWithTheSameNumbers() {
+        double len = 6, w = 10e3, ei = 2e7;
+        MemberActions a = new MemberActions(len, List.of(new MemberActions.Linear(0, len, 0, 0, -w, -w)), List.of(), List.of(), 0, 0);
+        double[] ends = {0, w * len / 2, 0, 0, w * len / 2, 0};
+        MemberSolution ms = MemberSolution.of(ends, a, ei, 0.001, -0.002);
+        assertEquals(w * len * len / 8, ms.peaks().value(plumbline.model.Quantity.M_MAX), 1e-9 * w * len * len, "wL^2/8");
+        MemberResponse first = ms.response();
+        org.junit.jupiter.api.Assertions.assertSame(first, ms.response(), "formed once, then kept");
+        assertEquals(w * len * len / 8, first.moment().at(len / 2), 1e-9 * w * len * len);
+        assertEquals(-w * len / 2, first.shear().atLeft(len), 1e-9 * w * len);
+        MemberResponse atOnce = MemberResponse.of(new double[]{0, w * len / 2, 0}, a, ei, 0.001, -0.002);
+        for (double x = 0; x <= len; x += 0.25) {
+            assertEquals(atOnce.moment().at(x), first.moment().at(x), 0.0, "M at " + x);
+            assertEquals(atOnce.deflection().at(x), first.deflection().at(x), 0.0, "v at " + x);
+        }
+        assertEquals(atOnce.peaks(), ms.peaks(), "the peaks held are those of the functions");
+        // an engine's own peaks are kept as given, its functions formed from the same end forces and loads
+        MemberSolution own = MemberSolution.withPeaks(ends, a, ei, 0.001, -0.002, atOnce.peaks());
+        assertEquals(atOnce.shear().at(1.0), own.response().shear().at(1.0), 0.0);
+        ends[1] = 0; // the solution keeps its own copy of the end forces
+        assertEquals(w * len / 2, ms.endForceLocal(1), 0.0);
+    }
+
     @Test
     void pointLoadJumpsShearAndCoupleJumpsMoment() {
         // simple beam, couple C at midspan (AISC Table 3-23 from memory, case of a concentrated moment):
