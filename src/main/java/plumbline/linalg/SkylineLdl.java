@@ -58,9 +58,11 @@ public final class SkylineLdl {
             double original = a[sj + j - mj];
             // g_ij = a_ij - sum_r l_ri d_r l_rj, stored in place of a_ij (rows above the diagonal)
             for (int i = mj + 1; i < j; i++) {
-                int mi = first[i], si = start[i];
+                int mi = first[i], r0 = Math.max(mi, mj);
+                // the two column segments from row r0 to row i-1, summed in row order
+                int pi = start[i] + r0 - mi, pj = sj + r0 - mj, end = pi + (i - r0);
                 double s = 0;
-                for (int r = Math.max(mi, mj); r < i; r++) s += a[si + r - mi] * a[sj + r - mj];
+                for (; pi < end; pi++, pj++) s += a[pi] * a[pj];
                 a[sj + i - mj] -= s;
             }
             // l_ij = g_ij / d_i; d_j = a_jj - sum_i g_ij l_ij
@@ -139,16 +141,16 @@ public final class SkylineLdl {
         if (b.length != n) throw new IllegalArgumentException("right-hand side of " + b.length + " entries for a matrix of " + n);
         double[] x = b.clone();
         for (int j = 0; j < n; j++) {           // L y = b
-            int mj = first[j], sj = start[j];
+            int mj = first[j], p = start[j] - mj;
             double s = 0;
-            for (int r = mj; r < j; r++) s += a[sj + r - mj] * x[r];
+            for (int r = mj; r < j; r++) s += a[p + r] * x[r];
             x[j] -= s;
         }
         for (int j = 0; j < n; j++) x[j] /= a[start[j] + j - first[j]]; // D z = y
         for (int j = n - 1; j >= 0; j--) {      // L^T x = z
-            int mj = first[j], sj = start[j];
+            int mj = first[j], p = start[j] - mj;
             double xj = x[j];
-            for (int r = mj; r < j; r++) x[r] -= a[sj + r - mj] * xj;
+            for (int r = mj; r < j; r++) x[r] -= a[p + r] * xj;
         }
         return x;
     }
