@@ -8,6 +8,8 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import plumbline.io.OutputBatch;
 import plumbline.model.InputException;
 import plumbline.model.Problem;
@@ -16,6 +18,7 @@ import plumbline.review.DrawnLoadSets;
 import plumbline.run.CheckInputs;
 import plumbline.run.Checked;
 import plumbline.run.Source;
+import plumbline.solve.SideBySide;
 
 /** The shared run of {@code check} and {@code solve}: read, analyse, review, write, exit code. */
 final class Run {
@@ -49,6 +52,17 @@ final class Run {
         }
         if (!problems.isEmpty()) throw new InputException(problems);
         return CheckInputs.of(modelFile, claimFiles);
+    }
+
+    /** The report made on the other core; its own failure is rethrown as it was raised. */
+    private static byte[] joined(CompletableFuture<byte[]> report) {
+        try {
+            return report.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) throw r;
+            if (e.getCause() instanceof Error err) throw err;
+            throw e;
+        }
     }
 
     static int execute(RunOptions o, PrintWriter out, PrintWriter err) {
@@ -85,7 +99,14 @@ final class Run {
         Map<String, byte[]> pictures = null;
         try {
             if (json != null) batch.add(json, c::writeJson, "--json");
-            if (pdf != null) batch.add(pdf, c.pdf(LocalDate.now()), "--pdf");
+            if (pdf != null && json != null && SideBySide.worth(in.model().members().size(), 2)) {
+                // a large model's report is drawn on the other core while its results are written (the
+                // batch writes the JSON first, then waits for the report; nothing is placed until both are whole)
+                CompletableFuture<byte[]> report = CompletableFuture.supplyAsync(() -> c.pdf(LocalDate.now()));
+                batch.add(pdf, stream -> stream.write(joined(report)), "--pdf");
+            } else if (pdf != null) {
+                batch.add(pdf, c.pdf(LocalDate.now()), "--pdf");
+            }
             if (figures != null) {
                 pictures = c.figures(DrawnLoadSets.choose(c.review()).names());
                 for (var p : pictures.entrySet()) batch.add(figures.resolve(p.getKey()), p.getValue(), "--figures");

@@ -35,6 +35,29 @@ class OutputsTest {
         }
     }
 
+    /**
+     * A large model's report is drawn on the other core while its results are written: the
+     * results are the very bytes, and the report the very text page by page, that a run making
+     * each alone writes. The model: a generated frame of 10 bays and 48 storeys (1,008
+     * members, invented data), above the size from which work is spread over the cores.
+     */
+    @Test
+    void aLargeModelsReportMadeBesideItsResultsIsTheSame() throws Exception {
+        Path model = dir.resolve("frame.yaml");
+        Files.writeString(model, plumbline.bench.FrameGenerator.frame(10, 48));
+        Path aJson = dir.resolve("a.json"), aPdf = dir.resolve("a.pdf"), bJson = dir.resolve("b.json"), bPdf = dir.resolve("b.pdf");
+        CliRunner both = CliRunner.run("check", model.toString(), "--json", aJson.toString(), "--pdf", aPdf.toString());
+        assertEquals(0, both.code(), both.err());
+        assertEquals(0, CliRunner.run("check", model.toString(), "--json", bJson.toString()).code());
+        assertEquals(0, CliRunner.run("check", model.toString(), "--pdf", bPdf.toString()).code());
+        assertTrue(plumbline.solve.SideBySide.worth(1008, 2), "the model is large enough to spread the work");
+        assertTrue(java.util.Arrays.equals(Files.readAllBytes(aJson), Files.readAllBytes(bJson)), "the same results, byte for byte");
+        List<String> a = ReportPagesTest.pages(aPdf), b = ReportPagesTest.pages(bPdf);
+        assertTrue(a.size() > 3, "pages: " + a.size());
+        assertEquals(b, a, "the same report, page by page");
+        assertEquals(List.of("a.json", "a.pdf", "b.json", "b.pdf", "frame.yaml"), files(), "no working file left");
+    }
+
     @Test
     void oneFileNamedByTwoOptionsIsRefusedBeforeAnyWork() throws Exception {
         Path out = dir.resolve("out.json");
