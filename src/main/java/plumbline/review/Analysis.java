@@ -76,10 +76,18 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
                 : CompletableFuture.completedFuture(Determinacy.of(model));
         // the engines, and the load sets of each, are independent of one another (pure functions of the
         // model): they run side by side on the machine's cores and are gathered back in their order, so
-        // every number is the same as in one thread
+        // every number is the same as in one thread. Each engine's load sets follow its own solution at
+        // once (a quick engine's sets are formed while a slower one still solves). A model the statics
+        // already found unstable (one thread) has no sets formed.
+        boolean setsWanted = parallel || joined(statics).classification() != Determinacy.Classification.UNSTABLE;
         List<Object> attempts = SideBySide.stream(engines, parallel).map(e -> {
             try {
-                return (Object) e.solve(em);
+                EngineResult r = e.solve(em);
+                if (!r.stable() || !setsWanted) return (Object) new Solved(r, null);
+                List<LoadSetResult> rs = SideBySide.stream(sets, parallel).map(s -> result(model, em, r, s, e.memberFunctions())).toList();
+                Map<String, LoadSetResult> byName = new LinkedHashMap<>();
+                for (int k = 0; k < sets.size(); k++) byName.put(sets.get(k).name(), rs.get(k));
+                return new Solved(r, byName);
             } catch (RuntimeException ex) {
                 return ex; // an engine may fail on a mechanism; the statics decide below whether that matters
             }
@@ -88,23 +96,18 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
         Map<String, EngineResult> results = new LinkedHashMap<>();
         Map<String, Map<String, LoadSetResult>> sols = new LinkedHashMap<>();
         if (det.classification() != Determinacy.Classification.UNSTABLE) {
-            List<EngineResult> solved = new ArrayList<>();
-            for (Object a : attempts) {
-                if (a instanceof RuntimeException ex) throw ex;
-                solved.add((EngineResult) a);
-            }
+            for (Object a : attempts) if (a instanceof RuntimeException ex) throw ex;
             for (int i = 0; i < engines.size(); i++) {
-                Engine e = engines.get(i);
-                EngineResult r = solved.get(i);
-                results.put(e.name(), r);
-                if (!r.stable()) continue;
-                List<LoadSetResult> rs = SideBySide.stream(sets, parallel).map(s -> result(model, em, r, s, e.memberFunctions())).toList();
-                Map<String, LoadSetResult> byName = new LinkedHashMap<>();
-                for (int k = 0; k < sets.size(); k++) byName.put(sets.get(k).name(), rs.get(k));
-                sols.put(e.name(), byName);
+                Solved sv = (Solved) attempts.get(i);
+                results.put(engines.get(i).name(), sv.result());
+                if (sv.sets() != null) sols.put(engines.get(i).name(), sv.sets());
             }
         }
         return new Analysis(model, em, det, sets, results, sols);
+    }
+
+    /** One engine's solution and its load sets (null when it found the model unstable). */
+    private record Solved(EngineResult result, Map<String, LoadSetResult> sets) {
     }
 
     private static <T> T joined(CompletableFuture<T> f) {
