@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.HashMap;
 import java.util.HashSet;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -137,6 +138,28 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
         }
         for (Support s : supports.values()) if (s.reacts(2)) out.add(s.node());
         return out;
+    }
+
+    /**
+     * Whether the other model has this one's nodes, members and supports, the very objects in
+     * the same order: all that the statics (determinacy and stability) reads. A variant that
+     * changes only loads, properties or claims shares them; one that changes a support or a
+     * member does not (objects are compared as the same object only, so a rebuilt but equal
+     * part counts as different: the careful answer).
+     */
+    public boolean hasTheSameFrameAs(Model other) {
+        return sameObjects(nodes, other.nodes) && sameObjects(members, other.members) && sameObjects(supports, other.supports);
+    }
+
+    private static <T> boolean sameObjects(Map<String, T> a, Map<String, T> b) {
+        if (a == b) return true;
+        if (a.size() != b.size()) return false;
+        Iterator<Map.Entry<String, T>> ia = a.entrySet().iterator(), ib = b.entrySet().iterator();
+        while (ia.hasNext()) {
+            Map.Entry<String, T> x = ia.next(), y = ib.next();
+            if (!x.getKey().equals(y.getKey()) || x.getValue() != y.getValue()) return false;
+        }
+        return true;
     }
 
     public Model withClaims(List<ClaimSet> more) {

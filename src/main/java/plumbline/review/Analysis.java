@@ -66,13 +66,29 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
         return of(model, engines, SideBySide.worth(model.members().size(), loadSets(model).size()));
     }
 
+    /**
+     * A variant of an analysed model (the diagnosis's trials) solved by {@code engines}: when the
+     * variant has the analysed model's very nodes, members and supports (it changes loads,
+     * properties or units only), the statics found for the model are its statics too and are
+     * not worked out again.
+     */
+    static Analysis variantOf(Analysis base, Model variant, List<Engine> engines) {
+        Determinacy.Result known = variant.hasTheSameFrameAs(base.model()) ? base.determinacy() : null;
+        return of(variant, engines, SideBySide.worth(variant.members().size(), loadSets(variant).size()), known);
+    }
+
     /** The analysis with its pieces run side by side ({@code parallel}) or in the calling thread: the same numbers. */
     static Analysis of(Model model, List<Engine> engines, boolean parallel) {
+        return of(model, engines, parallel, null);
+    }
+
+    private static Analysis of(Model model, List<Engine> engines, boolean parallel, Determinacy.Result knownStatics) {
         List<LoadSet> sets = loadSets(model);
         Model em = engineModel(model);
         // the statics (determinacy and stability) on one core while the engines start on the other
         // (on a large model); on an unstable model the engines' work is discarded, as if they had not run
-        CompletableFuture<Determinacy.Result> statics = parallel ? CompletableFuture.supplyAsync(() -> Determinacy.of(model))
+        CompletableFuture<Determinacy.Result> statics = knownStatics != null ? CompletableFuture.completedFuture(knownStatics)
+                : parallel ? CompletableFuture.supplyAsync(() -> Determinacy.of(model))
                 : CompletableFuture.completedFuture(Determinacy.of(model));
         // the engines, and the load sets of each, are independent of one another (pure functions of the
         // model): they run side by side on the machine's cores and are gathered back in their order, so

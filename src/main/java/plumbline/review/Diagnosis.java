@@ -254,7 +254,7 @@ final class Diagnosis {
             if (isFixed(s) || isPinned(s)) tries.put(fixityWords(s), x -> withFixity(x, List.of(s)));
         }
         for (var t : tries.entrySet()) {
-            Analysis va = cache.computeIfAbsent(t.getKey(), k -> Analysis.of(t.getValue().apply(m), List.of(engine)));
+            Analysis va = cache.computeIfAbsent(t.getKey(), k -> Analysis.variantOf(a, t.getValue().apply(m), List.of(engine)));
             if (!va.stable() || !va.solutions().containsKey(engine.name())) continue;
             LoadSetResult r = va.solutions().get(engine.name()).get(c.combo());
             if (r == null) continue;

@@ -478,8 +478,8 @@ final class Explanations {
     /** A variant model solved by the variant engine (cached by its words), or null when not stable or not asked for. */
     private Analysis variant(String words, Function<Model, Model> change, boolean applies) {
         if (!applies || variantEngine == null) return null;
-        Analysis v = variants.computeIfAbsent(words, k -> Analysis.of(change.apply(a.model()), List.of(variantEngine)));
-        // (a variant of the loads alone could reuse the determinacy; supports change it)
+        Analysis v = variants.computeIfAbsent(words, k -> Analysis.variantOf(a, change.apply(a.model()), List.of(variantEngine)));
+        // (a variant of the loads or properties alone takes the model's statics; one of the supports has its own)
         return v.stable() && v.solutions().containsKey(variantEngine.name()) ? v : null;
     }
 

@@ -103,6 +103,36 @@ class AnalysisStaticsTest {
         assertTrue(compared > 100, "compared " + compared);
     }
 
+    /**
+     * A diagnosis's variant that keeps the model's very nodes, members and supports (only its
+     * claims, loads or properties changed) takes the model's statics; any other variant has its
+     * own worked out: the beam on two rollers read as a variant of the pinned beam is found
+     * unstable (a mechanism of degree 1), not given the pinned beam's "determinate".
+     */
+    @Test
+    void aVariantTakesTheModelsStaticsOnlyWhenItKeepsItsFrame() throws Exception {
+        Model pinned = beam("pinned");
+        List<Engine> engines = List.of(new StiffnessEngine());
+        Analysis base = Analysis.of(pinned, engines);
+        assertEquals(Determinacy.Classification.DETERMINATE, base.determinacy().classification());
+        Model sameFrame = pinned.withClaims(List.of());
+        assertTrue(sameFrame.hasTheSameFrameAs(pinned));
+        org.junit.jupiter.api.Assertions.assertSame(base.determinacy(), Analysis.variantOf(base, sameFrame, engines).determinacy());
+        // the pinned beam's own nodes and members on the two rollers' supports (a diagnosis's support trial)
+        Model p = pinned, r = beam("roller");
+        Model rollers = new Model(p.file(), p.job(), p.units(), p.materials(), p.sections(), p.nodes(), r.supports(), p.members(),
+                p.loadCases(), p.combinations(), p.standardCombinations(), p.redundants(), p.claims());
+        assertFalse(rollers.hasTheSameFrameAs(pinned));
+        Analysis v = Analysis.variantOf(base, rollers, engines);
+        assertEquals(Determinacy.Classification.UNSTABLE, v.determinacy().classification());
+        assertFalse(v.stable());
+        Model rebuilt = beam("pinned"); // equal, but rebuilt: its statics are worked out again (the careful answer)
+        assertFalse(rebuilt.hasTheSameFrameAs(pinned));
+        Analysis w = Analysis.variantOf(base, rebuilt, engines);
+        assertFalse(w.determinacy() == base.determinacy());
+        assertEquals(base.determinacy().classification(), w.determinacy().classification());
+    }
+
     @Test
     void onlyWorkOfSomeSizeIsSpreadOverTheCores() {
         assertFalse(SideBySide.worth(3, 4), "a sample: one thread");
