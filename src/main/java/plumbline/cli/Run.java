@@ -9,7 +9,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
 import plumbline.io.OutputBatch;
 import plumbline.model.InputException;
 import plumbline.model.Problem;
@@ -54,17 +53,6 @@ final class Run {
         return CheckInputs.of(modelFile, claimFiles);
     }
 
-    /** The report made on the other core; its own failure is rethrown as it was raised. */
-    private static byte[] joined(CompletableFuture<byte[]> report) {
-        try {
-            return report.join();
-        } catch (CompletionException e) {
-            if (e.getCause() instanceof RuntimeException r) throw r;
-            if (e.getCause() instanceof Error err) throw err;
-            throw e;
-        }
-    }
-
     static int execute(RunOptions o, PrintWriter out, PrintWriter err) {
         Path json = o.json(), pdf = o.pdf(), figures = o.figures();
         CheckInputs in;
@@ -103,7 +91,7 @@ final class Run {
                 // a large model's report is drawn on the other core while its results are written (the
                 // batch writes the JSON first, then waits for the report; nothing is placed until both are whole)
                 CompletableFuture<byte[]> report = CompletableFuture.supplyAsync(() -> c.pdf(LocalDate.now()));
-                batch.add(pdf, stream -> stream.write(joined(report)), "--pdf");
+                batch.add(pdf, stream -> stream.write(SideBySide.joined(report)), "--pdf");
             } else if (pdf != null) {
                 batch.add(pdf, c.pdf(LocalDate.now()), "--pdf");
             }

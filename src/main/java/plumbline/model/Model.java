@@ -9,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.BiPredicate;
 import plumbline.units.UnitSystem;
 
 /**
@@ -148,16 +149,19 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
      * part counts as different: the careful answer).
      */
     public boolean hasTheSameFrameAs(Model other) {
-        return sameObjects(nodes, other.nodes) && sameObjects(members, other.members) && sameObjects(supports, other.supports);
+        BiPredicate<Object, Object> sameObject = (x, y) -> x == y;
+        return sameParts(nodes, other.nodes, sameObject) && sameParts(members, other.members, sameObject)
+                && sameParts(supports, other.supports, sameObject);
     }
 
-    private static <T> boolean sameObjects(Map<String, T> a, Map<String, T> b) {
+    /** The same names in the same order, the parts under each name {@code alike}: how variants of a model are compared. */
+    public static <T> boolean sameParts(Map<String, T> a, Map<String, T> b, BiPredicate<? super T, ? super T> alike) {
         if (a == b) return true;
         if (a.size() != b.size()) return false;
         Iterator<Map.Entry<String, T>> ia = a.entrySet().iterator(), ib = b.entrySet().iterator();
         while (ia.hasNext()) {
             Map.Entry<String, T> x = ia.next(), y = ib.next();
-            if (!x.getKey().equals(y.getKey()) || x.getValue() != y.getValue()) return false;
+            if (!x.getKey().equals(y.getKey()) || !alike.test(x.getValue(), y.getValue())) return false;
         }
         return true;
     }

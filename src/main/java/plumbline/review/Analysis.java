@@ -5,7 +5,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
 import plumbline.model.Combination;
 import plumbline.model.LoadCase;
 import plumbline.model.MemberLoad;
@@ -63,7 +62,8 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
     }
 
     public static Analysis of(Model model, List<Engine> engines) {
-        return of(model, engines, SideBySide.worth(model.members().size(), loadSets(model).size()));
+        List<LoadSet> sets = loadSets(model);
+        return of(model, engines, sets, SideBySide.worth(model.members().size(), sets.size()), null);
     }
 
     /**
@@ -74,16 +74,17 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
      */
     static Analysis variantOf(Analysis base, Model variant, List<Engine> engines) {
         Determinacy.Result known = variant.hasTheSameFrameAs(base.model()) ? base.determinacy() : null;
-        return of(variant, engines, SideBySide.worth(variant.members().size(), loadSets(variant).size()), known);
+        List<LoadSet> sets = loadSets(variant);
+        return of(variant, engines, sets, SideBySide.worth(variant.members().size(), sets.size()), known);
     }
 
     /** The analysis with its pieces run side by side ({@code parallel}) or in the calling thread: the same numbers. */
     static Analysis of(Model model, List<Engine> engines, boolean parallel) {
-        return of(model, engines, parallel, null);
+        return of(model, engines, loadSets(model), parallel, null);
     }
 
-    private static Analysis of(Model model, List<Engine> engines, boolean parallel, Determinacy.Result knownStatics) {
-        List<LoadSet> sets = loadSets(model);
+    private static Analysis of(Model model, List<Engine> engines, List<LoadSet> sets, boolean parallel,
+                               Determinacy.Result knownStatics) {
         Model em = engineModel(model);
         // the statics (determinacy and stability) on one core while the engines start on the other
         // (on a large model); on an unstable model the engines' work is discarded, as if they had not run
@@ -95,7 +96,7 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
         // every number is the same as in one thread. Each engine's load sets follow its own solution at
         // once (a quick engine's sets are formed while a slower one still solves). A model the statics
         // already found unstable (one thread) has no sets formed.
-        boolean setsWanted = parallel || joined(statics).classification() != Determinacy.Classification.UNSTABLE;
+        boolean setsWanted = parallel || SideBySide.joined(statics).classification() != Determinacy.Classification.UNSTABLE;
         List<Object> attempts = SideBySide.stream(engines, parallel).map(e -> {
             try {
                 EngineResult r = e.solve(em);
@@ -108,7 +109,7 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
                 return ex; // an engine may fail on a mechanism; the statics decide below whether that matters
             }
         }).toList();
-        Determinacy.Result det = joined(statics);
+        Determinacy.Result det = SideBySide.joined(statics);
         Map<String, EngineResult> results = new LinkedHashMap<>();
         Map<String, Map<String, LoadSetResult>> sols = new LinkedHashMap<>();
         if (det.classification() != Determinacy.Classification.UNSTABLE) {
@@ -124,16 +125,6 @@ public record Analysis(Model model, Model engineModel, Determinacy.Result determ
 
     /** One engine's solution and its load sets (null when it found the model unstable). */
     private record Solved(EngineResult result, Map<String, LoadSetResult> sets) {
-    }
-
-    private static <T> T joined(CompletableFuture<T> f) {
-        try {
-            return f.join();
-        } catch (CompletionException e) {
-            if (e.getCause() instanceof RuntimeException r) throw r;
-            if (e.getCause() instanceof Error err) throw err;
-            throw e;
-        }
     }
 
     /** The result of load set {@code s} from the engine's load-case solutions, by superposition (pattern parts kept apart). */

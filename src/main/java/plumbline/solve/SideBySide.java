@@ -1,6 +1,8 @@
 package plumbline.solve;
 
 import java.util.Collection;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import java.util.stream.Stream;
 
 /**
@@ -30,5 +32,16 @@ public final class SideBySide {
     /** Whether pieces of work on a model of {@code members} members are worth running side by side. */
     public static boolean worth(int members, int pieces) {
         return (long) members * Math.max(1, pieces) >= FROM_MEMBER_PIECES;
+    }
+
+    /** The result of a piece made on another core, waited for; its own failure is rethrown as it was raised. */
+    public static <T> T joined(CompletableFuture<T> piece) {
+        try {
+            return piece.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) throw r;
+            if (e.getCause() instanceof Error err) throw err;
+            throw e;
+        }
     }
 }

@@ -3,7 +3,6 @@ package plumbline.statics;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import plumbline.model.LoadCase;
-import plumbline.model.LoadDirection;
 import plumbline.model.Member;
 import plumbline.model.MemberLoad;
 import plumbline.model.Model;

@@ -2,13 +2,13 @@ package plumbline.solve.stiffness;
 
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BiPredicate;
 import plumbline.linalg.NodeOrdering;
 import plumbline.linalg.SkylineLdl;
 import plumbline.linalg.SkylineMatrix;
@@ -118,27 +118,17 @@ public final class StiffnessEngine implements Engine {
         return factorAndSolve(model);
     }
 
-    /** Whether two models have the same stiffness: everything but their loads, combinations and claims alike. */
-    static boolean sameStructure(Model a, Model b) {
-        return a == b || (same(a.nodes(), b.nodes()) && same(a.members(), b.members()) && same(a.sections(), b.sections())
-                && same(a.materials(), b.materials()) && same(a.supports(), b.supports()));
-    }
-
     /**
-     * The same names in the same order with equal values. A variant of a model shares most of
-     * its parts with it, so each value is first compared as the same object (the records'
-     * own equals is linked through method handles the first time it runs).
+     * Whether two models have the same stiffness: everything but their loads, combinations and
+     * claims alike. A variant of a model shares most of its parts with it, so each part is first
+     * compared as the same object (the records' own equals is linked through method handles the
+     * first time it runs).
      */
-    private static <T> boolean same(Map<String, T> a, Map<String, T> b) {
-        if (a == b) return true;
-        if (a.size() != b.size()) return false;
-        Iterator<Map.Entry<String, T>> ia = a.entrySet().iterator(), ib = b.entrySet().iterator();
-        while (ia.hasNext()) {
-            Map.Entry<String, T> x = ia.next(), y = ib.next();
-            if (!x.getKey().equals(y.getKey())) return false;
-            if (x.getValue() != y.getValue() && !x.getValue().equals(y.getValue())) return false;
-        }
-        return true;
+    static boolean sameStructure(Model a, Model b) {
+        BiPredicate<Object, Object> equal = (x, y) -> x == y || x.equals(y);
+        return a == b || (Model.sameParts(a.nodes(), b.nodes(), equal) && Model.sameParts(a.members(), b.members(), equal)
+                && Model.sameParts(a.sections(), b.sections(), equal) && Model.sameParts(a.materials(), b.materials(), equal)
+                && Model.sameParts(a.supports(), b.supports(), equal));
     }
 
     private EngineResult cases(Factored kf, List<String> notes, List<EngineWarning> warnings) {
