@@ -18,6 +18,7 @@ import plumbline.model.Quantity;
 import plumbline.review.LoadSetResult;
 import plumbline.solve.MemberSolution;
 import plumbline.solve.Piecewise;
+import plumbline.solve.Poly;
 import plumbline.solve.Solution;
 import plumbline.units.Dimension;
 
@@ -75,6 +76,20 @@ public final class Diagrams {
     /** The deflected shape of a member is drawn as at least this many straight pieces, however short it is. */
     private static final int DRAWN_SEGMENTS_AT_LEAST = 6;
 
+    /** Straight pieces drawn between the samples of a piece: one for a straight piece, else {@link #SAMPLES}. */
+    static int steps(Poly piece) {
+        return piece.degree() <= 1 ? 1 : SAMPLES;
+    }
+
+    /**
+     * Every how many of a deflected shape's {@code n} sample intervals a point is drawn, for a
+     * curve {@code lengthPt} points long: about one point apart, at least
+     * {@link #DRAWN_SEGMENTS_AT_LEAST} pieces, every sample on a curve of n points or more.
+     */
+    static int every(int n, double lengthPt) {
+        return Math.max(1, Math.min(n / DRAWN_SEGMENTS_AT_LEAST, (int) Math.floor(n / Math.max(lengthPt, 1e-9))));
+    }
+
     private static Piecewise function(MemberSolution ms, Kind k) {
         return switch (k) {
             case AXIAL -> ms.response().axial();
@@ -91,7 +106,7 @@ public final class Diagrams {
             Piecewise p = function(r.representative().members().get(mem.name()), kind);
             for (int seg = 0; seg < p.segments(); seg++) {
                 // a straight piece (no load along it) is drawn exactly by its two ends
-                int steps = p.piece(seg).degree() <= 1 ? 1 : SAMPLES;
+                int steps = steps(p.piece(seg));
                 for (int i = 0; i <= steps; i++) {
                     double x = p.start(seg) + (p.end(seg) - p.start(seg)) * i / steps;
                     out.add(new double[]{x, p.piece(seg).at(x - p.start(seg))});
@@ -351,7 +366,7 @@ public final class Diagrams {
             // drawn through every sample a point or less apart along the curve (all 61 on a member
             // of 60 points or more; a few on the short members of a large model, where more would
             // not show and would only slow the file); the largest is found on all of them above
-            int n = line.length - 1, every = Math.max(1, Math.min(n / DRAWN_SEGMENTS_AT_LEAST, (int) Math.floor(n / Math.max(lengthPt, 1e-9))));
+            int n = line.length - 1, every = every(n, lengthPt);
             Path2D path = new Path2D.Double();
             path.moveTo(drawn[0][0], drawn[0][1]);
             for (int i = every; i < n; i += every) path.lineTo(drawn[i][0], drawn[i][1]);
