@@ -86,8 +86,10 @@ final class Run {
         OutputBatch batch = new OutputBatch();
         Map<String, byte[]> pictures = null;
         try {
-            if (json != null) batch.add(json, c::writeJson, "--json");
-            if (pdf != null && json != null && SideBySide.worth(in.model().members().size(), 2)) {
+            boolean reportBeside = pdf != null && json != null && SideBySide.worth(in.model().members().size(), 2);
+            // the results are written by two threads unless the report is drawn on the other core meanwhile
+            if (json != null) batch.add(json, stream -> c.writeJson(stream, !reportBeside), "--json");
+            if (reportBeside) {
                 // a large model's report is drawn on the other core while its results are written (the
                 // batch writes the JSON first, then waits for the report; nothing is placed until both are whole)
                 CompletableFuture<byte[]> report = CompletableFuture.supplyAsync(() -> c.pdf(LocalDate.now()));

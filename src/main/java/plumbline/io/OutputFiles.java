@@ -3,14 +3,20 @@ package plumbline.io;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.SerializableString;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
+import java.nio.ByteBuffer;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
 import plumbline.model.InputException;
 import plumbline.model.Problem;
 import plumbline.model.SourceRef;
@@ -65,29 +71,230 @@ public final class OutputFiles {
      * only maps, lists, texts, numbers, booleans, nulls and streamed parts.
      */
     public static void json(Map<String, Object> tree, boolean indent, OutputStream out) throws IOException {
+        json(tree, indent, false, out);
+    }
+
+    /**
+     * As {@link #json(Map, boolean, OutputStream)}; with {@code twoThreads} (compact text only) the
+     * streamed parts are written by two threads: a helper thread writes parts a little ahead of
+     * the writer into memory, the writer writes the others itself and copies the helper's in
+     * their place. The text is the same bytes either way (a compact value's text does not depend
+     * on where it stands); only the time differs.
+     */
+    public static void json(Map<String, Object> tree, boolean indent, boolean twoThreads, OutputStream out) throws IOException {
         // the shortest decimal that reads back as the same double (Schubfach), written without Double.toString's
         // detours; the stream is the caller's to close
         JsonFactory f = JsonFactory.builder().enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
                 .disable(StreamWriteFeature.AUTO_CLOSE_TARGET).build();
+        SharedParts parts = null;
+        if (twoThreads && !indent) {
+            List<JsonOut.Streamed> found = new ArrayList<>();
+            collect(tree, found);
+            if (found.size() > 1) parts = new SharedParts(f, found);
+        }
         try (JsonGenerator g = f.createGenerator(out)) {
             if (indent) g.useDefaultPrettyPrinter();
-            write(g, tree);
+            write(g, tree, parts);
+        } finally {
+            if (parts != null) parts.stop();
         }
     }
 
-    private static void write(JsonGenerator g, Object v) throws IOException {
+    /** The streamed parts of a tree in the order they are written. */
+    private static void collect(Object v, List<JsonOut.Streamed> found) {
+        if (v instanceof Map<?, ?> m) {
+            for (Object x : m.values()) collect(x, found);
+        } else if (v instanceof Iterable<?> list) {
+            for (Object x : list) collect(x, found);
+        } else if (v instanceof JsonOut.Streamed s) {
+            found.add(s);
+        }
+    }
+
+    /**
+     * The streamed parts of one compact tree shared by the writer and a helper thread. Parts are
+     * taken in order, each by one thread, and none more than {@link #AHEAD} parts beyond the
+     * writer's place (so at most that many texts are held in memory). The helper writes each part
+     * it takes into memory. The writer, reaching a part, writes it straight out if no one has
+     * taken it; if the helper is still writing it, the writer takes the next free part into
+     * memory meanwhile, then copies the helper's text in its place.
+     */
+    private static final class SharedParts {
+        static final int AHEAD = 4;
+        private final JsonFactory f;
+        private final List<JsonOut.Streamed> parts;
+        private final List<CompletableFuture<byte[]>> texts = new ArrayList<>();
+        private int taken, written; // parts taken by either thread; parts the writer is past (guarded by this)
+        private boolean stopped;
+        private int reached; // the writer's next part (the writer's own)
+
+        SharedParts(JsonFactory f, List<JsonOut.Streamed> parts) {
+            this.f = f;
+            this.parts = parts;
+            for (int i = 0; i < parts.size(); i++) texts.add(new CompletableFuture<>());
+            Thread helper = new Thread(this::help, "results writer");
+            helper.setDaemon(true);
+            helper.start();
+        }
+
+        private void help() {
+            while (true) {
+                int j;
+                synchronized (this) {
+                    while (!stopped && taken < parts.size() && taken > written + AHEAD) {
+                        try {
+                            wait();
+                        } catch (InterruptedException e) {
+                            return;
+                        }
+                    }
+                    if (stopped || taken >= parts.size()) return;
+                    j = taken++;
+                }
+                writeToMemory(j);
+            }
+        }
+
+        /** Part {@code j}'s text, written into memory (or the failure that stopped it). */
+        private void writeToMemory(int j) {
+            try {
+                ByteArrayOutputStream text = new ByteArrayOutputStream(1 << 16);
+                try (JsonGenerator g = f.createGenerator(text)) {
+                    parts.get(j).write(new JsonOut(g));
+                }
+                texts.get(j).complete(text.toByteArray());
+            } catch (Throwable t) {
+                texts.get(j).completeExceptionally(t);
+            }
+        }
+
+        /** The writer's next part, written straight out or copied from its text in memory. */
+        void writeNext(JsonGenerator g) throws IOException {
+            int i = reached++;
+            while (true) {
+                int other = -1;
+                synchronized (this) {
+                    if (taken == i) {
+                        taken++;
+                        break;
+                    }
+                    if (!texts.get(i).isDone() && taken < parts.size() && taken <= written + AHEAD) other = taken++;
+                }
+                if (other < 0) {
+                    copy(i, g);
+                    return;
+                }
+                writeToMemory(other);
+            }
+            parts.get(i).write(new JsonOut(g));
+            passed(i);
+        }
+
+        private void copy(int i, JsonGenerator g) throws IOException {
+            byte[] text;
+            try {
+                text = texts.get(i).get();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IOException("interrupted while writing the results", e);
+            } catch (ExecutionException e) {
+                if (e.getCause() instanceof IOException io) throw io;
+                if (e.getCause() instanceof RuntimeException r) throw r;
+                if (e.getCause() instanceof Error err) throw err;
+                throw new IOException(e.getCause());
+            }
+            texts.set(i, null); // the copied text is let go
+            g.writeRawValue(new RawUtf8(text));
+            passed(i);
+        }
+
+        private synchronized void passed(int i) {
+            written = i + 1;
+            notifyAll();
+        }
+
+        synchronized void stop() {
+            stopped = true;
+            notifyAll();
+        }
+    }
+
+    /** JSON text already written (UTF-8), placed as one value. */
+    private record RawUtf8(byte[] text) implements SerializableString {
+        public String getValue() {
+            return new String(text, StandardCharsets.UTF_8);
+        }
+
+        public int charLength() {
+            return getValue().length();
+        }
+
+        public char[] asQuotedChars() {
+            throw new UnsupportedOperationException("raw JSON text is not quoted");
+        }
+
+        public byte[] asUnquotedUTF8() {
+            return text;
+        }
+
+        public byte[] asQuotedUTF8() {
+            throw new UnsupportedOperationException("raw JSON text is not quoted");
+        }
+
+        public int appendQuotedUTF8(byte[] buffer, int offset) {
+            throw new UnsupportedOperationException("raw JSON text is not quoted");
+        }
+
+        public int appendQuoted(char[] buffer, int offset) {
+            throw new UnsupportedOperationException("raw JSON text is not quoted");
+        }
+
+        public int appendUnquotedUTF8(byte[] buffer, int offset) {
+            if (text.length > buffer.length - offset) return -1;
+            System.arraycopy(text, 0, buffer, offset, text.length);
+            return text.length;
+        }
+
+        public int appendUnquoted(char[] buffer, int offset) {
+            String s = getValue();
+            if (s.length() > buffer.length - offset) return -1;
+            s.getChars(0, s.length(), buffer, offset);
+            return s.length();
+        }
+
+        public int writeQuotedUTF8(OutputStream out) {
+            throw new UnsupportedOperationException("raw JSON text is not quoted");
+        }
+
+        public int writeUnquotedUTF8(OutputStream out) throws IOException {
+            out.write(text);
+            return text.length;
+        }
+
+        public int putQuotedUTF8(ByteBuffer buffer) {
+            throw new UnsupportedOperationException("raw JSON text is not quoted");
+        }
+
+        public int putUnquotedUTF8(ByteBuffer buffer) {
+            if (text.length > buffer.remaining()) return -1;
+            buffer.put(text);
+            return text.length;
+        }
+    }
+
+    private static void write(JsonGenerator g, Object v, SharedParts parts) throws IOException {
         if (v == null) {
             g.writeNull();
         } else if (v instanceof Map<?, ?> m) {
             g.writeStartObject();
             for (var e : m.entrySet()) {
                 g.writeFieldName((String) e.getKey());
-                write(g, e.getValue());
+                write(g, e.getValue(), parts);
             }
             g.writeEndObject();
         } else if (v instanceof Iterable<?> list) {
             g.writeStartArray();
-            for (Object item : list) write(g, item);
+            for (Object item : list) write(g, item, parts);
             g.writeEndArray();
         } else if (v instanceof String s) {
             g.writeString(s);
@@ -99,7 +306,8 @@ public final class OutputFiles {
             g.writeBoolean(b);
         } else if (v instanceof JsonOut.Streamed s) {
             // a streamed part writes itself into the same generator, so it is laid out as a map would be
-            s.write(new JsonOut(g));
+            if (parts != null) parts.writeNext(g);
+            else s.write(new JsonOut(g));
         } else {
             throw new IllegalArgumentException("no JSON form for a " + v.getClass().getName() + " in the results");
         }

@@ -15,6 +15,7 @@ import plumbline.review.Analysis;
 import plumbline.review.Review;
 import plumbline.review.TolerancePolicy;
 import plumbline.solve.Engine;
+import plumbline.solve.SideBySide;
 import plumbline.solve.force.ForceEngine;
 import plumbline.solve.stiffness.StiffnessEngine;
 
@@ -143,10 +144,20 @@ public final class Checked {
 
     /** The results JSON (format reference section 5), indented unless the model is large. */
     public void writeJson(OutputStream out) throws IOException {
+        writeJson(out, false);
+    }
+
+    /**
+     * The results JSON; with {@code otherCoreFree} the results of a large model are written by
+     * two threads (the same bytes; nothing else is using the machine's other core).
+     */
+    public void writeJson(OutputStream out, boolean otherCoreFree) throws IOException {
         Map<String, Object> tree = ResultsTree.of(review, recorded(), analysis.primaryEngine(), agreement());
         tree.put("notes", notes);
         // large results are written compact: indentation would double a file of many megabytes
-        OutputFiles.json(tree, inputs.model().members().size() <= COMPACT_JSON_ABOVE, out);
+        int members = inputs.model().members().size();
+        OutputFiles.json(tree, members <= COMPACT_JSON_ABOVE,
+                otherCoreFree && SideBySide.worth(members, analysis.loadSets().size()), out);
     }
 
     /** The PDF discrepancy report, dated {@code date}. */
