@@ -2,8 +2,8 @@ package plumbline.model;
 
 import java.util.ArrayList;
 import java.util.Collections;
-import java.util.HashMap;
 import java.util.HashSet;
+import java.util.IdentityHashMap;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -23,18 +23,23 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
                     List<String> standardCombinations, List<String> redundants, List<ClaimSet> claims, Geometry geometry) {
 
     /**
-     * What the nodes' coordinates give, worked out once per model (the solvers ask for a
-     * member's length and direction many times per load set): per member {length m, cx, cy},
-     * and the model's extent.
+     * What the nodes' coordinates and the sections give, worked out once per model (the solvers
+     * and the equilibrium check ask for a member's length and direction many times per load
+     * set): each member's placement, keyed by the member object itself (the very members of
+     * this model; an identity lookup needs no name comparison), the model's extent, and the
+     * largest axial stiffness EA of its members.
      */
-    public record Geometry(Map<String, double[]> members, double extentM) {
-        static Geometry of(Map<String, Node> nodes, Map<String, Member> members) {
-            Map<String, double[]> out = new HashMap<>(members.size() * 2);
+    public record Geometry(Map<Member, Placement> members, double extentM, double largestAxialStiffnessN) {
+        static Geometry of(Map<String, Node> nodes, Map<String, Member> members, Map<String, Section> sections,
+                           Map<String, Material> materials) {
+            Map<Member, Placement> out = new IdentityHashMap<>(members.size());
+            double ea = 0;
             for (Member m : members.values()) {
                 Node a = nodes.get(m.from()), b = nodes.get(m.to());
-                if (a == null || b == null) continue; // an unknown node is reported by the structure check
-                double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
-                out.put(m.name(), new double[]{len, dx / len, dy / len});
+                if (a != null && b != null) out.put(m, Placement.between(a, b)); // an unknown node is reported by the structure check
+                Section s = sections.get(m.section());
+                Material mat = s == null ? null : materials.get(s.material());
+                if (mat != null) ea = Math.max(ea, mat.ePa() * s.areaM2());
             }
             double minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY;
             double minY = Double.POSITIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
@@ -45,7 +50,18 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
                 maxY = Math.max(maxY, n.yM());
             }
             double extent = nodes.isEmpty() ? 1.0 : Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-9);
-            return new Geometry(Collections.unmodifiableMap(out), extent);
+            return new Geometry(Collections.unmodifiableMap(out), extent, ea);
+        }
+    }
+
+    /**
+     * Where a member lies: its end relative to its start {dxM, dyM} (m, global), its length
+     * (m) and its unit vector from start to end {cx, cy} (its local x axis in global axes).
+     */
+    public record Placement(double lengthM, double cx, double cy, double dxM, double dyM) {
+        static Placement between(Node a, Node b) {
+            double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
+            return new Placement(len, dx / len, dy / len, dx, dy);
         }
     }
 
@@ -55,7 +71,7 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
                  Map<String, Member> members, List<LoadCase> loadCases, List<Combination> combinations,
                  List<String> standardCombinations, List<String> redundants, List<ClaimSet> claims) {
         this(file, job, units, materials, sections, nodes, supports, members, loadCases, combinations, standardCombinations,
-                redundants, claims, Geometry.of(nodes, members));
+                redundants, claims, Geometry.of(nodes, members, sections, materials));
     }
 
     public Model {
@@ -92,20 +108,25 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
         return materials.get(sectionOf(m).material());
     }
 
+    /** Where the member lies (its length, direction and extent along x and y); any member, this model's found at once. */
+    public Placement placementOf(Member m) {
+        Placement p = geometry.members().get(m);
+        return p != null ? p : Placement.between(node(m.from()), node(m.to())); // a member not of this model (a variant's)
+    }
+
     public double lengthM(Member m) {
-        double[] g = geometry.members().get(m.name());
-        if (g != null && members.get(m.name()) == m) return g[0];
-        Node a = node(m.from()), b = node(m.to()); // a member not of this model (a variant's)
-        return Math.hypot(b.xM() - a.xM(), b.yM() - a.yM());
+        return placementOf(m).lengthM();
     }
 
     /** The member's unit vector from its start to its end, {cx, cy}: its local x axis in global axes. */
     public double[] directionOf(Member m) {
-        double[] g = geometry.members().get(m.name());
-        if (g != null && members.get(m.name()) == m) return new double[]{g[1], g[2]};
-        Node a = node(m.from()), b = node(m.to());
-        double len = lengthM(m);
-        return new double[]{(b.xM() - a.xM()) / len, (b.yM() - a.yM()) / len};
+        Placement p = placementOf(m);
+        return new double[]{p.cx(), p.cy()};
+    }
+
+    /** The largest axial stiffness EA of the model's members (N), 0 with none. */
+    public double largestAxialStiffnessN() {
+        return geometry.largestAxialStiffnessN();
     }
 
     /** Axial stiffness EA of a member (N). */

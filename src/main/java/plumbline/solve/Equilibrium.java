@@ -1,11 +1,11 @@
 package plumbline.solve;
 
 import java.util.HashMap;
+import java.util.Iterator;
 import java.util.Map;
 import plumbline.model.LoadCase;
 import plumbline.model.Member;
 import plumbline.model.Model;
-import plumbline.model.Node;
 import plumbline.model.NodeLoad;
 import plumbline.statics.AppliedLoads;
 
@@ -64,7 +64,7 @@ public final class Equilibrium {
                            Map<String, MemberSolution> members, Map<String, Double> factors) {
         double lc = model.extentM();
         Map<String, double[]> memberLoads = AppliedLoads.memberResultants(model, factors);
-        Map<String, double[]> sum = new HashMap<>();
+        Map<String, double[]> sum = new HashMap<>(model.nodes().size() * 4 / 3 + 1); // sized for every node: never rehashed
         double scale = 0, worst = 0;
         for (var e : nodeLoads(model, factors).entrySet()) {
             double[] a = sum.computeIfAbsent(e.getKey(), k -> new double[3]);
@@ -76,11 +76,14 @@ public final class Equilibrium {
             for (int i = 0; i < 3; i++) a[i] += e.getValue()[i];
             scale = Math.max(scale, magnitude(e.getValue(), lc));
         }
+        // the solution's members are read in step with the model's (the engines list them in its order),
+        // looked up by name only where the order differs
+        Iterator<Member> modelOrder = model.members().values().iterator();
         for (var e : members.entrySet()) {
-            Member m = model.member(e.getKey());
-            Node a = model.node(m.from()), b = model.node(m.to());
-            double dx = b.xM() - a.xM(), dy = b.yM() - a.yM(), len = Math.hypot(dx, dy);
-            double cx = dx / len, cy = dy / len;
+            Member next = modelOrder.hasNext() ? modelOrder.next() : null;
+            Member m = next != null && next.name().equals(e.getKey()) ? next : model.member(e.getKey());
+            Model.Placement at = model.placementOf(m);
+            double dx = at.dxM(), dy = at.dyM(), cx = at.cx(), cy = at.cy();
             MemberSolution f = e.getValue(); // its end forces read in place (no copy)
             // end forces on the member, local {fx, fy} turned to global {gx, gy} = {fx cx - fy cy, fx cy + fy cx}
             double[] gi = {f.endForceLocal(0) * cx - f.endForceLocal(1) * cy, f.endForceLocal(0) * cy + f.endForceLocal(1) * cx,
@@ -110,8 +113,7 @@ public final class Equilibrium {
         // A floor for load cases that strain nothing (a settlement of a determinate structure):
         // forces below 1e-5 of those that would strain the stiffest member by the
         // largest displacement over the model's extent are rounding, not imbalance.
-        double ea = 0, u = 0;
-        for (Member m : model.members().values()) ea = Math.max(ea, model.axialStiffnessN(m));
+        double ea = model.largestAxialStiffnessN(), u = 0;
         for (double[] d : displacements.values()) u = Math.max(u, Math.hypot(d[0], d[1]));
         scale = Math.max(scale, Math.max(1e-12 * ea, 1e-5 * ea * u / lc));
         for (double[] a : sum.values()) worst = Math.max(worst, magnitude(a, lc));

@@ -1,6 +1,7 @@
 package plumbline.solve;
 
 import java.util.Arrays;
+import java.util.List;
 
 /**
  * Exact internal forces and transverse displacement along one member, from the forces
@@ -35,18 +36,24 @@ public record MemberResponse(Piecewise axial, Piecewise shear, Piecewise moment,
         double nAt = -fStart[0], vAt = fStart[1], mAt = -fStart[2];
         double slopeW = 0, wAt = 0; // W'' = M/EI + kappa with W(0) = W'(0) = 0
         boolean bending = Double.isFinite(eiNm2) && eiNm2 > 0;
+        List<MemberActions.Point> points = actions.points();
+        List<MemberActions.Couple> couples = actions.couples();
+        List<MemberActions.Linear> distributed = actions.distributed();
         for (int k = 0; k < n; k++) {
             double x0 = x[k], x1 = x[k + 1];
-            // point actions at x0
-            for (MemberActions.Point p : actions.points()) {
+            // point actions at x0 (indexed loops: an iterator per list, segment, member and load set is garbage
+            // the quick compiler cannot avoid)
+            for (int i = 0; i < points.size(); i++) {
+                MemberActions.Point p = points.get(i);
                 if (p.aM() == x0) {
                     nAt -= p.px();
                     vAt += p.qy();
                 }
             }
-            for (MemberActions.Couple c : actions.couples()) if (c.aM() == x0) mAt -= c.mz();
+            for (int i = 0; i < couples.size(); i++) if (couples.get(i).aM() == x0) mAt -= couples.get(i).mz();
             Poly q = Poly.ZERO, p = Poly.ZERO;
-            for (MemberActions.Linear l : actions.distributed()) {
+            for (int i = 0; i < distributed.size(); i++) {
+                MemberActions.Linear l = distributed.get(i);
                 if (l.aM() <= x0 && l.bM() >= x1 && l.bM() > l.aM()) {
                     double slopeQ = (l.q2() - l.q1()) / (l.bM() - l.aM());
                     double slopeP = (l.p2() - l.p1()) / (l.bM() - l.aM());

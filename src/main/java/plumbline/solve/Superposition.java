@@ -34,22 +34,27 @@ public final class Superposition {
         // order), looked up by name only where a part's order differs: a lookup in a map of thousands
         // of members costs several cache misses, and a combination makes one per member and part
         List<Map.Entry<Solution, Double>> partList = new ArrayList<>(parts.entrySet());
-        List<Iterator<Map.Entry<String, MemberSolution>>> inStep = new ArrayList<>();
-        for (var p : partList) inStep.add(p.getKey().members().entrySet().iterator());
+        // (names and members by two iterators over the same map: an entry iterator of an unmodifiable map wraps every entry)
+        List<Iterator<String>> namesInStep = new ArrayList<>();
+        List<Iterator<MemberSolution>> inStep = new ArrayList<>();
+        for (var p : partList) {
+            namesInStep.add(p.getKey().members().keySet().iterator());
+            inStep.add(p.getKey().members().values().iterator());
+        }
         for (Member m : model.members().values()) {
             double[] f = new double[6];
             double vs = 0, ve = 0;
-            MemberActions a = MemberActions.none(model.lengthM(m));
+            MemberActions.Sum a = new MemberActions.Sum(model.lengthM(m));
             for (int q = 0; q < partList.size(); q++) {
                 var p = partList.get(q);
-                MemberSolution s = inStep(inStep.get(q), m.name(), p.getKey());
+                MemberSolution s = inStep(namesInStep.get(q), inStep.get(q), m.name(), p.getKey());
                 double k = p.getValue();
                 for (int i = 0; i < 6; i++) f[i] += k * s.endForceLocal(i);
                 vs += k * s.vStartM();
                 ve += k * s.vEndM();
-                if (k != 0) a = a.plus(s.actions().scaled(k));
+                if (k != 0) a.add(s.actions(), k);
             }
-            members.put(m.name(), functions.solve(f, a, bendingStiffness(model, m), vs, ve));
+            members.put(m.name(), functions.solve(f, a.result(), bendingStiffness(model, m), vs, ve));
         }
         Map<String, Double> factors = new LinkedHashMap<>();
         for (var p : parts.entrySet()) factors.merge(p.getKey().name(), p.getValue(), Double::sum);
@@ -57,10 +62,11 @@ public final class Superposition {
     }
 
     /** The part's next member when it is the one named (the usual case), else the part's member of that name. */
-    private static MemberSolution inStep(Iterator<Map.Entry<String, MemberSolution>> it, String name, Solution part) {
-        if (it.hasNext()) {
-            Map.Entry<String, MemberSolution> e = it.next();
-            if (e.getKey().equals(name)) return e.getValue();
+    private static MemberSolution inStep(Iterator<String> names, Iterator<MemberSolution> members, String name, Solution part) {
+        if (names.hasNext()) {
+            String next = names.next();
+            MemberSolution s = members.next();
+            if (next.equals(name)) return s;
         }
         return part.members().get(name);
     }

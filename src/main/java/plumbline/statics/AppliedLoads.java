@@ -53,14 +53,14 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
      * self-weight acts downward at mid-length. Members with no load are absent.
      */
     public static Map<String, double[]> memberResultants(Model model, Map<String, Double> factors) {
-        Map<String, double[]> out = new LinkedHashMap<>();
+        Map<String, double[]> out = new LinkedHashMap<>(model.members().size() * 4 / 3 + 1); // never rehashed
         for (var f : factors.entrySet()) {
             LoadCase c = model.loadCase(f.getKey());
             double k = f.getValue();
             for (MemberLoad l : c.memberLoads()) {
                 Member m = model.member(l.member());
-                double[] e = model.directionOf(m);
-                double ex = e[0], ey = e[1];
+                Model.Placement e = model.placementOf(m);
+                double ex = e.cx(), ey = e.cy();
                 double[] r = out.computeIfAbsent(m.name(), x -> new double[4]);
                 if (l instanceof MemberLoad.Couple cp) {
                     r[2] += k * cp.momentNm();
@@ -88,12 +88,12 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
             }
             if (c.selfWeight()) {
                 for (Member m : model.members().values()) {
-                    double w = model.materialOf(m).weightDensityNPerM3() * model.sectionOf(m).areaM2() * model.lengthM(m);
+                    Model.Placement at = model.placementOf(m);
+                    double w = model.materialOf(m).weightDensityNPerM3() * model.sectionOf(m).areaM2() * at.lengthM();
                     if (w == 0) continue;
-                    Node a = model.node(m.from()), b = model.node(m.to());
                     double[] r = out.computeIfAbsent(m.name(), x -> new double[4]);
                     r[1] -= k * w;
-                    r[2] -= k * w * 0.5 * (b.xM() - a.xM()); // acting at mid-length: lever arm half the member's x extent
+                    r[2] -= k * w * 0.5 * at.dxM(); // acting at mid-length: lever arm half the member's x extent
                     r[3] += Math.abs(k * w);
                 }
             }

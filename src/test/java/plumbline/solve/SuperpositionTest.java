@@ -148,6 +148,11 @@ class SuperpositionTest {
             for (Quantity q : PEAKS) assertEquals(a.members().get(mem).peaks().value(q), b.members().get(mem).peaks().value(q), 0.0, mem + " " + q);
         }
         assertEquals(a.equilibriumResidual(), b.equilibriumResidual(), 0.0);
+        // the equilibrium check reads a solution's members in step with the model's too: listed backwards
+        // they still balance (a member taken for another would leave an imbalance of the order of the loads)
+        double backwardsResidual = Equilibrium.residual(m, dBackwards, Map.of("D", 1.0));
+        assertTrue(backwardsResidual < 1e-12, "residual of the members listed backwards: " + backwardsResidual);
+        assertEquals(Equilibrium.residual(m, d, Map.of("D", 1.0)), backwardsResidual, 1e-14);
         // and the combination is the one solved directly (so neither order is wrong the same way)
         Solution direct = r.cases().get("F");
         for (String mem : m.members().keySet()) {
@@ -172,6 +177,11 @@ class SuperpositionTest {
         assertEquals(List.of(a.couples().get(0), twice.couples().get(0)), sum.couples());
         assertEquals(-1e-4, sum.thermalStrain(), 1e-18);
         assertEquals(-2e-3, sum.thermalCurvaturePerM(), 1e-18);
+        // the one-pass factored sum is, load by load and in order, the scaled parts added one by one
+        MemberActions b = new MemberActions(6, List.of(new MemberActions.Linear(0, 6, 1, 1, 2, 4)), List.of(),
+                List.of(new MemberActions.Couple(4, -5)), -3e-4, 5e-3);
+        assertEquals(a.scaled(1.35).plus(b.scaled(-0.9)), new MemberActions.Sum(6).add(a, 1.35).add(b, -0.9).result());
+        assertEquals(MemberActions.none(6), new MemberActions.Sum(6).result());
         assertTrue(MemberActions.none(6).isEmpty());
         assertFalse(new MemberActions(6, List.of(), List.of(), List.of(), 1e-4, 0).isEmpty(), "a thermal strain alone is a load");
         assertFalse(new MemberActions(6, List.of(), List.of(), List.of(), 0, 1e-4).isEmpty(), "a thermal curvature alone is a load");
