@@ -181,13 +181,12 @@ public final class ResultsTree {
 
     /** Every member's peaks of one load set, where each occurs, and (pattern envelope) the members loaded for it. */
     private static void members(UnitSystem u, Collection<String> names, LoadSetResult r, JsonOut out) throws IOException {
-        LoadSetResult.Peak[] peaks = new LoadSetResult.Peak[PEAKS.size()];
         out.startObject();
         for (String name : names) {
             out.name(name).startObject();
+            LoadSetResult.Peak[] peaks = r.peaks(name, PEAKS);
             for (int i = 0; i < peaks.length; i++) {
                 Quantity q = PEAKS.get(i);
-                peaks[i] = r.peak(name, q);
                 out.name(q.symbol).number(u.fromInternal(peaks[i].value(), q.dimension));
             }
             out.name("at").startObject();
@@ -222,13 +221,16 @@ public final class ResultsTree {
         List<LoadSetResult> results = combos.stream().map(s -> sols.get(s.name())).toList();
         out.put("members", (JsonOut.Streamed) json -> {
             json.startObject();
+            LoadSetResult.Peak[][] byCombination = new LoadSetResult.Peak[combos.size()][];
             for (String mem : m.members().keySet()) {
                 json.name(mem).startObject();
-                for (Quantity q : PEAKS) {
+                for (int k = 0; k < combos.size(); k++) byCombination[k] = results.get(k).peaks(mem, PEAKS);
+                for (int i = 0; i < PEAKS.size(); i++) {
+                    Quantity q = PEAKS.get(i);
                     double best = Double.NaN;
                     String gov = null;
                     for (int k = 0; k < combos.size(); k++) {
-                        double v = results.get(k).peak(mem, q).value();
+                        double v = byCombination[k][i].value();
                         boolean better = Double.isNaN(best) || (q.extreme == Quantity.Extreme.MIN ? v < best : v > best);
                         if (better) {
                             best = v;

@@ -6,7 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import plumbline.solve.Envelope;
 import plumbline.solve.MemberResponse;
-import plumbline.solve.MemberSolution;
+import plumbline.solve.Peaks;
 import plumbline.solve.Piecewise;
 import plumbline.solve.Solution;
 
@@ -30,6 +30,13 @@ public sealed interface LoadSetResult {
     double displacement(String node, int component, boolean upper);
 
     Peak peak(String member, Quantity quantity);
+
+    /** The member's peaks of these quantities, in their order (as {@link #peak} of each). */
+    default Peak[] peaks(String member, List<Quantity> quantities) {
+        Peak[] out = new Peak[quantities.size()];
+        for (int i = 0; i < out.length; i++) out[i] = peak(member, quantities.get(i));
+        return out;
+    }
 
     /**
      * A member function's value at {@code xM} from the start (the value just left of it when
@@ -71,8 +78,20 @@ public sealed interface LoadSetResult {
         }
 
         public Peak peak(String member, Quantity quantity) {
-            MemberSolution m = solution.members().get(member);
-            return new Peak(m.peaks().value(quantity), m.peaks().position(quantity), List.of());
+            return peak(solution.members().get(member).peaks(), quantity);
+        }
+
+        /** The member looked up once for all the quantities (the results list every peak of every member). */
+        @Override
+        public Peak[] peaks(String member, List<Quantity> quantities) {
+            Peaks p = solution.members().get(member).peaks();
+            Peak[] out = new Peak[quantities.size()];
+            for (int i = 0; i < out.length; i++) out[i] = peak(p, quantities.get(i));
+            return out;
+        }
+
+        private static Peak peak(Peaks p, Quantity quantity) {
+            return new Peak(p.value(quantity), p.position(quantity), List.of());
         }
 
         public double valueAt(String member, Quantity.Function f, double xM, boolean fromLeft, boolean upper) {

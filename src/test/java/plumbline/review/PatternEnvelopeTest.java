@@ -95,6 +95,17 @@ class PatternEnvelopeTest {
         assertEquals(r.representative().equilibriumResidual(), plain.equilibriumResidual(), 0);
         // every span loaded: R_A = 0.4 wL = 24 kN (three equal spans, by the same equations: M_B = -wL^2/10)
         assertEquals(24e3, plain.reaction("A", 1, true), 1e-6);
+        // all of a member's peaks at once (as the results list them) are its peaks one by one, in order,
+        // for a plain set and for an envelope; M_B = -wL^2/10 = -36 kN*m hogging over B (w = 10 kN/m, L = 6 m)
+        List<Quantity> all = Quantity.peaks();
+        for (LoadSetResult x : List.of(plain, r)) {
+            for (String mem : List.of("S1", "S2", "S3")) {
+                LoadSetResult.Peak[] together = x.peaks(mem, all);
+                assertEquals(all.size(), together.length);
+                for (int i = 0; i < all.size(); i++) assertEquals(x.peak(mem, all.get(i)), together[i], mem + " " + all.get(i));
+            }
+        }
+        assertEquals(-36e3, plain.peaks("S1", List.of(Quantity.M_MIN))[0].value(), 1e-6);
     }
 
     @Test
