@@ -39,8 +39,7 @@ public final class Agreement {
 
     public static double maxRelativeDifference(Model model, Map<String, Solution> a, Map<String, Solution> b) {
         double worst = 0;
-        double extent = model.extentM(), ea = 0;
-        for (Member m : model.members().values()) ea = Math.max(ea, model.axialStiffnessN(m));
+        double extent = model.extentM(), ea = model.largestAxialStiffnessN();
         // force, moment, translation, rotation: the largest of each kind over every load set
         double[] scale = {ZERO_FRACTION * ea, ZERO_FRACTION * ea * extent, ZERO_FRACTION * extent, ZERO_FRACTION};
         for (Solution x : a.values()) {
@@ -62,9 +61,11 @@ public final class Agreement {
                     scale[3] = Math.max(scale[3], Math.abs(d[2]));
                 }
                 for (MemberSolution m : x.members().values()) {
-                    double[] f = m.endForcesLocal();
-                    scale[0] = Math.max(scale[0], Math.max(Math.max(Math.abs(f[0]), Math.abs(f[1])), Math.max(Math.abs(f[3]), Math.abs(f[4]))));
-                    scale[1] = Math.max(scale[1], Math.max(Math.max(Math.abs(f[2]), Math.abs(f[5])), m.peaks().value(Quantity.M_ABS)));
+                    // end forces read in place (no copy per member and load set)
+                    scale[0] = Math.max(scale[0], Math.max(Math.max(Math.abs(m.endForceLocal(0)), Math.abs(m.endForceLocal(1))),
+                            Math.max(Math.abs(m.endForceLocal(3)), Math.abs(m.endForceLocal(4)))));
+                    scale[1] = Math.max(scale[1], Math.max(Math.max(Math.abs(m.endForceLocal(2)), Math.abs(m.endForceLocal(5))),
+                            m.peaks().value(Quantity.M_ABS)));
                     scale[2] = Math.max(scale[2], m.peaks().deflection().value());
                 }
             }
@@ -99,9 +100,9 @@ public final class Agreement {
                 worst = Math.max(worst, rel(p[2], q[2], scale[3]));
             }
             for (var m : s.members().entrySet()) {
-                double[] f = m.getValue().endForcesLocal(), g = t.members().get(m.getKey()).endForcesLocal();
-                for (int k = 0; k < 6; k++) worst = Math.max(worst, rel(f[k], g[k], k % 3 == 2 ? scale[1] : scale[0]));
-                Peaks p = m.getValue().peaks(), q = t.members().get(m.getKey()).peaks();
+                MemberSolution f = m.getValue(), g = t.members().get(m.getKey());
+                for (int k = 0; k < 6; k++) worst = Math.max(worst, rel(f.endForceLocal(k), g.endForceLocal(k), k % 3 == 2 ? scale[1] : scale[0]));
+                Peaks p = f.peaks(), q = g.peaks();
                 for (Quantity k : new Quantity[]{Quantity.N_MAX, Quantity.N_MIN, Quantity.V_MAX, Quantity.V_MIN}) worst = Math.max(worst, rel(p.value(k), q.value(k), scale[0]));
                 for (Quantity k : new Quantity[]{Quantity.M_MAX, Quantity.M_MIN}) worst = Math.max(worst, rel(p.value(k), q.value(k), scale[1]));
                 worst = Math.max(worst, rel(p.value(Quantity.DEFLECTION), q.value(Quantity.DEFLECTION), scale[2]));
