@@ -1,6 +1,8 @@
 package plumbline.io;
 
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.StreamWriteFeature;
+import com.fasterxml.jackson.core.io.NumberOutput;
 import java.io.IOException;
 import java.util.List;
 
@@ -17,10 +19,21 @@ public final class JsonOut {
         void write(JsonOut out) throws IOException;
     }
 
+    /** Slots of the table of recent numbers' texts (a power of two). */
+    static final int RECENT = 64;
+
     private final JsonGenerator g;
+    private final boolean shortestText;
+    // The texts of numbers written lately, by the number's bits (one per slot, the latest wins): the
+    // results repeat many numbers (positions at a member's ends and middle, a column's constant axial
+    // force, a support's zero), and forming a number's text is most of the cost of writing it. A number
+    // found here is written as the very text the generator would form for it.
+    private final long[] recentBits = new long[RECENT];
+    private final String[] recentTexts = new String[RECENT];
 
     JsonOut(JsonGenerator g) {
         this.g = g;
+        this.shortestText = g.isEnabled(StreamWriteFeature.USE_FAST_DOUBLE_WRITER);
     }
 
     public JsonOut startObject() throws IOException {
@@ -50,8 +63,20 @@ public final class JsonOut {
 
     /** A number; null when it is not finite. */
     public JsonOut number(double v) throws IOException {
-        if (Double.isFinite(v)) g.writeNumber(v);
-        else g.writeNull();
+        if (!Double.isFinite(v)) {
+            g.writeNull();
+            return this;
+        }
+        long bits = Double.doubleToRawLongBits(v);
+        int slot = (int) ((bits * 0x9E3779B97F4A7C15L) >>> (64 - Integer.numberOfTrailingZeros(RECENT)));
+        String text = recentTexts[slot];
+        if (text == null || recentBits[slot] != bits) {
+            // the text the generator forms for a double (its own writeNumber(double) writes exactly this)
+            text = NumberOutput.toString(v, shortestText);
+            recentTexts[slot] = text;
+            recentBits[slot] = bits;
+        }
+        g.writeNumber(text);
         return this;
     }
 
