@@ -129,6 +129,25 @@ class AgreementFigureTest {
         assertEquals(0.05, figure(both), 1e-9);
         Map<String, Solution> a = Map.of("W", BASE, "X", BASE), b = Map.of("W", BASE, "X", withReaction("A", 1, 0.2 * FORCE));
         assertEquals(0.2, Agreement.maxRelativeDifference(MODEL, a, b), 1e-9, "the second load set's difference");
+        // load sets read side by side (a large model's way) or one after another: the same figure to the bit,
+        // the worst set found wherever it stands, and the scale the largest over all sets
+        for (boolean sideBySide : new boolean[]{true, false}) {
+            Map<String, Solution> many = new LinkedHashMap<>(), slipped = new LinkedHashMap<>();
+            for (int k = 0; k < 9; k++) {
+                many.put("S" + k, BASE);
+                slipped.put("S" + k, k == 6 ? withReaction("A", 1, 0.2 * FORCE) : k == 2 ? withReaction("B", 1, 0.03 * FORCE) : BASE);
+            }
+            assertEquals(0.2, Agreement.maxRelativeDifference(MODEL, many, slipped, sideBySide), 1e-9, "side by side: " + sideBySide);
+            assertEquals(Agreement.maxRelativeDifference(MODEL, many, slipped, !sideBySide),
+                    Agreement.maxRelativeDifference(MODEL, many, slipped, sideBySide), 0.0);
+            // a set whose reactions are twice as large raises every set's force scale: 7.5 kN against 75 kN
+            Map<String, double[]> twice = new LinkedHashMap<>();
+            BASE.reactions().forEach((n, v) -> twice.put(n, new double[]{2 * v[0], 2 * v[1], v[2]}));
+            Solution large = new Solution("W", BASE.displacements(), twice, BASE.members(), 0);
+            many.put("S8", large);
+            slipped.put("S8", large);
+            assertEquals(0.1, Agreement.maxRelativeDifference(MODEL, many, slipped, sideBySide), 1e-9, "scale over all sets");
+        }
         // the scale is the largest of either solution: a doubled reaction is judged against the doubled value
         Map<String, double[]> doubled = new LinkedHashMap<>(BASE.reactions());
         doubled.put("A", new double[]{0, 2 * FORCE, BASE.reactions().get("A")[2]});
