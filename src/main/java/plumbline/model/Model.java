@@ -95,6 +95,16 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
         return members.get(name);
     }
 
+    /**
+     * The member named {@code name}, taken from {@code inOrder} (an iterator over this model's
+     * members, advanced one step) when it is the next one there, else looked up by name: how a
+     * list of members in the model's order (an engine's solution) is read without a lookup each.
+     */
+    public Member memberInStep(Iterator<Member> inOrder, String name) {
+        Member next = inOrder.hasNext() ? inOrder.next() : null;
+        return next != null && next.name().equals(name) ? next : members.get(name);
+    }
+
     public LoadCase loadCase(String name) {
         for (LoadCase c : loadCases) if (c.name().equals(name)) return c;
         return null;

@@ -64,7 +64,7 @@ public final class Equilibrium {
                            Map<String, MemberSolution> members, Map<String, Double> factors) {
         double lc = model.extentM();
         Map<String, double[]> memberLoads = AppliedLoads.memberResultants(model, factors);
-        Map<String, double[]> sum = new HashMap<>(model.nodes().size() * 4 / 3 + 1); // sized for every node: never rehashed
+        Map<String, double[]> sum = new HashMap<>();
         double scale = 0, worst = 0;
         for (var e : nodeLoads(model, factors).entrySet()) {
             double[] a = sum.computeIfAbsent(e.getKey(), k -> new double[3]);
@@ -80,8 +80,7 @@ public final class Equilibrium {
         // looked up by name only where the order differs
         Iterator<Member> modelOrder = model.members().values().iterator();
         for (var e : members.entrySet()) {
-            Member next = modelOrder.hasNext() ? modelOrder.next() : null;
-            Member m = next != null && next.name().equals(e.getKey()) ? next : model.member(e.getKey());
+            Member m = model.memberInStep(modelOrder, e.getKey());
             Model.Placement at = model.placementOf(m);
             double dx = at.dxM(), dy = at.dyM(), cx = at.cx(), cy = at.cy();
             MemberSolution f = e.getValue(); // its end forces read in place (no copy)

@@ -53,7 +53,7 @@ public record AppliedLoads(double fxN, double fyN, double momentNm, double magni
      * self-weight acts downward at mid-length. Members with no load are absent.
      */
     public static Map<String, double[]> memberResultants(Model model, Map<String, Double> factors) {
-        Map<String, double[]> out = new LinkedHashMap<>(model.members().size() * 4 / 3 + 1); // never rehashed
+        Map<String, double[]> out = new LinkedHashMap<>();
         for (var f : factors.entrySet()) {
             LoadCase c = model.loadCase(f.getKey());
             double k = f.getValue();

@@ -68,4 +68,17 @@ class PlacementTest {
         assertEquals(Math.hypot(3, 5), variant.lengthM(m1), 0.0);
         assertEquals(5.0, m.lengthM(m1), 0.0, "the model's own placement is unchanged");
     }
+
+    /** Members read in the model's order take the next one; out of order, or past the end, they are looked up by name. */
+    @Test
+    void membersAreReadInStepOrByName() {
+        Model m = Models.yaml(MODEL);
+        java.util.Iterator<Member> inOrder = m.members().values().iterator();
+        assertSame(m.member("M1"), m.memberInStep(inOrder, "M1"));
+        assertSame(m.member("M2"), m.memberInStep(inOrder, "M2"));
+        assertSame(m.member("M1"), m.memberInStep(inOrder, "M1"), "past the end: by name");
+        java.util.Iterator<Member> fresh = m.members().values().iterator();
+        assertSame(m.member("M2"), m.memberInStep(fresh, "M2"), "out of order: by name, not the next one");
+        assertEquals(null, m.memberInStep(fresh, "M9"), "no such member");
+    }
 }
