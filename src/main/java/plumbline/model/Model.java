@@ -197,10 +197,11 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
         return true;
     }
 
+    /** This model with more claims; the very nodes, members and sections, so its geometry is this one's. */
     public Model withClaims(List<ClaimSet> more) {
         List<ClaimSet> all = new ArrayList<>(claims);
         all.addAll(more);
         return new Model(file, job, units, materials, sections, nodes, supports, members, loadCases,
-                combinations, standardCombinations, redundants, all);
+                combinations, standardCombinations, redundants, all, geometry);
     }
 }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertNotSame;
 import static org.junit.jupiter.api.Assertions.assertSame;
 
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import plumbline.Models;
@@ -67,6 +68,10 @@ class PlacementTest {
                 m.loadCases(), m.combinations(), m.standardCombinations(), m.redundants(), m.claims());
         assertEquals(Math.hypot(3, 5), variant.lengthM(m1), 0.0);
         assertEquals(5.0, m.lengthM(m1), 0.0, "the model's own placement is unchanged");
+        // the model with more claims has the very same frame: its placements are the model's own
+        Model claimed = m.withClaims(List.of());
+        assertSame(m.placementOf(m1), claimed.placementOf(claimed.member("M1")));
+        assertEquals(6.0e9, claimed.largestAxialStiffnessN(), 1e-6);
     }
 
     /** Members read in the model's order take the next one; out of order, or past the end, they are looked up by name. */
