@@ -63,21 +63,11 @@ public record MemberActions(double lengthM, List<Linear> distributed, List<Point
                 && thermalCurvaturePerM == 0;
     }
 
-    public MemberActions scaled(double f) {
-        // plain loops: this runs for every member of every part of every combination
-        List<Linear> d = new ArrayList<>(distributed.size());
-        for (Linear l : distributed) d.add(l.scaled(f));
-        List<Point> p = new ArrayList<>(points.size());
-        for (Point x : points) p.add(x.scaled(f));
-        List<Couple> c = new ArrayList<>(couples.size());
-        for (Couple x : couples) c.add(x.scaled(f));
-        return new MemberActions(lengthM, d, p, c, thermalStrain * f, thermalCurvaturePerM * f);
-    }
-
     /**
-     * A factored sum of actions, k1 a1 + k2 a2 + ..., formed in one pass: the same loads in the
-     * same order, each the same product, as {@code a1.scaled(k1).plus(a2.scaled(k2))...}, without
-     * the lists of every step (a combination forms one per member).
+     * A factored sum of actions, k1 a1 + k2 a2 + ...: every load of a1 scaled by k1, then every
+     * load of a2 scaled by k2 ..., in their order (loads on one member superpose; nothing is
+     * merged), the thermal actions summed in the same order. A combination forms one per
+     * member, in one pass without intermediate lists.
      */
     public static final class Sum {
         private final double lengthM;
@@ -102,17 +92,6 @@ public record MemberActions(double lengthM, List<Linear> distributed, List<Point
         public MemberActions result() {
             return new MemberActions(lengthM, distributed, points, couples, thermalStrain, thermalCurvaturePerM);
         }
-    }
-
-    public MemberActions plus(MemberActions o) {
-        List<Linear> d = new ArrayList<>(distributed);
-        d.addAll(o.distributed);
-        List<Point> p = new ArrayList<>(points);
-        p.addAll(o.points);
-        List<Couple> c = new ArrayList<>(couples);
-        c.addAll(o.couples);
-        return new MemberActions(lengthM, d, p, c, thermalStrain + o.thermalStrain,
-                thermalCurvaturePerM + o.thermalCurvaturePerM);
     }
 
     /** Resultant local forces and moment about the start: {sum px, sum qy, moment about x=0 (ccw)}. */

@@ -79,7 +79,7 @@ class SafeguardTest {
     /** Shared loads scaled by 1.01 (a factor slip of one per cent). */
     static final MemberLoading SCALE_SLIP = (model, c) -> {
         Map<String, MemberActions> out = new LinkedHashMap<>();
-        MemberActions.of(model, c).forEach((k, a) -> out.put(k, a.scaled(1.01)));
+        MemberActions.of(model, c).forEach((k, a) -> out.put(k, new MemberActions.Sum(a.lengthM()).add(a, 1.01).result()));
         return out;
     };
 

@@ -165,22 +165,27 @@ class SuperpositionTest {
     void scalingAndAddingMemberActionsByHand() {
         MemberActions a = new MemberActions(6, List.of(new MemberActions.Linear(1, 3, 10, 20, 30, 40)),
                 List.of(new MemberActions.Point(2, 5, 7)), List.of(new MemberActions.Couple(1, 3)), 1e-4, 2e-3);
-        MemberActions twice = a.scaled(-2);
+        MemberActions twice = new MemberActions.Sum(6).add(a, -2).result();
         assertEquals(new MemberActions.Linear(1, 3, -20, -40, -60, -80), twice.distributed().get(0));
         assertEquals(new MemberActions.Point(2, -10, -14), twice.points().get(0));
         assertEquals(new MemberActions.Couple(1, -6), twice.couples().get(0));
         assertEquals(-2e-4, twice.thermalStrain(), 1e-18);
         assertEquals(-4e-3, twice.thermalCurvaturePerM(), 1e-18);
-        MemberActions sum = a.plus(twice);
+        MemberActions sum = new MemberActions.Sum(6).add(a, 1).add(twice, 1).result();
         assertEquals(List.of(a.distributed().get(0), twice.distributed().get(0)), sum.distributed());
         assertEquals(List.of(a.points().get(0), twice.points().get(0)), sum.points());
         assertEquals(List.of(a.couples().get(0), twice.couples().get(0)), sum.couples());
         assertEquals(-1e-4, sum.thermalStrain(), 1e-18);
         assertEquals(-2e-3, sum.thermalCurvaturePerM(), 1e-18);
-        // the one-pass factored sum is, load by load and in order, the scaled parts added one by one
+        // the factored sum is, load by load and in order, each part's loads scaled by its factor (by hand)
         MemberActions b = new MemberActions(6, List.of(new MemberActions.Linear(0, 6, 1, 1, 2, 4)), List.of(),
                 List.of(new MemberActions.Couple(4, -5)), -3e-4, 5e-3);
-        assertEquals(a.scaled(1.35).plus(b.scaled(-0.9)), new MemberActions.Sum(6).add(a, 1.35).add(b, -0.9).result());
+        MemberActions byHand = new MemberActions(6,
+                List.of(new MemberActions.Linear(1, 3, 10 * 1.35, 20 * 1.35, 30 * 1.35, 40 * 1.35), new MemberActions.Linear(0, 6, -0.9, -0.9, -1.8, 4 * -0.9)),
+                List.of(new MemberActions.Point(2, 5 * 1.35, 7 * 1.35)),
+                List.of(new MemberActions.Couple(1, 3 * 1.35), new MemberActions.Couple(4, -5 * -0.9)),
+                1e-4 * 1.35 + -3e-4 * -0.9, 2e-3 * 1.35 + 5e-3 * -0.9);
+        assertEquals(byHand, new MemberActions.Sum(6).add(a, 1.35).add(b, -0.9).result());
         assertEquals(MemberActions.none(6), new MemberActions.Sum(6).result());
         assertTrue(MemberActions.none(6).isEmpty());
         assertFalse(new MemberActions(6, List.of(), List.of(), List.of(), 1e-4, 0).isEmpty(), "a thermal strain alone is a load");
