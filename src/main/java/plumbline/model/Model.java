@@ -96,13 +96,20 @@ public record Model(String file, Job job, UnitSystem units, Map<String, Material
     }
 
     /**
-     * The member named {@code name}, taken from {@code inOrder} (an iterator over this model's
-     * members, advanced one step) when it is the next one there, else looked up by name: how a
-     * list of members in the model's order (an engine's solution) is read without a lookup each.
+     * The part named {@code name} of a map read in step with another list in the same order:
+     * the next of {@code names} and {@code parts} (iterators over the map's names and parts,
+     * advanced together one step) when it has that name, else the part looked up in
+     * {@code byName}. How an engine's solution, listed in the model's order, is read member by
+     * member without a lookup each (two iterators: an entry iterator of an unmodifiable map
+     * wraps every entry).
      */
-    public Member memberInStep(Iterator<Member> inOrder, String name) {
-        Member next = inOrder.hasNext() ? inOrder.next() : null;
-        return next != null && next.name().equals(name) ? next : members.get(name);
+    public static <T> T inStep(Iterator<String> names, Iterator<T> parts, String name, Map<String, T> byName) {
+        if (names.hasNext()) {
+            String next = names.next();
+            T part = parts.next();
+            if (next.equals(name)) return part;
+        }
+        return byName.get(name);
     }
 
     public LoadCase loadCase(String name) {

@@ -78,9 +78,10 @@ public final class Equilibrium {
         }
         // the solution's members are read in step with the model's (the engines list them in its order),
         // looked up by name only where the order differs
-        Iterator<Member> modelOrder = model.members().values().iterator();
+        Iterator<String> modelNames = model.members().keySet().iterator();
+        Iterator<Member> modelMembers = model.members().values().iterator();
         for (var e : members.entrySet()) {
-            Member m = model.memberInStep(modelOrder, e.getKey());
+            Member m = Model.inStep(modelNames, modelMembers, e.getKey(), model.members());
             Model.Placement at = model.placementOf(m);
             double dx = at.dxM(), dy = at.dyM(), cx = at.cx(), cy = at.cy();
             MemberSolution f = e.getValue(); // its end forces read in place (no copy)

@@ -34,7 +34,6 @@ public final class Superposition {
         // order), looked up by name only where a part's order differs: a lookup in a map of thousands
         // of members costs several cache misses, and a combination makes one per member and part
         List<Map.Entry<Solution, Double>> partList = new ArrayList<>(parts.entrySet());
-        // (names and members by two iterators over the same map: an entry iterator of an unmodifiable map wraps every entry)
         List<Iterator<String>> namesInStep = new ArrayList<>();
         List<Iterator<MemberSolution>> inStep = new ArrayList<>();
         for (var p : partList) {
@@ -47,7 +46,7 @@ public final class Superposition {
             MemberActions.Sum a = new MemberActions.Sum(model.lengthM(m));
             for (int q = 0; q < partList.size(); q++) {
                 var p = partList.get(q);
-                MemberSolution s = inStep(namesInStep.get(q), inStep.get(q), m.name(), p.getKey());
+                MemberSolution s = Model.inStep(namesInStep.get(q), inStep.get(q), m.name(), p.getKey().members());
                 double k = p.getValue();
                 for (int i = 0; i < 6; i++) f[i] += k * s.endForceLocal(i);
                 vs += k * s.vStartM();
@@ -59,16 +58,6 @@ public final class Superposition {
         Map<String, Double> factors = new LinkedHashMap<>();
         for (var p : parts.entrySet()) factors.merge(p.getKey().name(), p.getValue(), Double::sum);
         return new Solution(name, disp, reac, members, Equilibrium.residual(model, disp, reac, members, factors));
-    }
-
-    /** The part's next member when it is the one named (the usual case), else the part's member of that name. */
-    private static MemberSolution inStep(Iterator<String> names, Iterator<MemberSolution> members, String name, Solution part) {
-        if (names.hasNext()) {
-            String next = names.next();
-            MemberSolution s = members.next();
-            if (next.equals(name)) return s;
-        }
-        return part.members().get(name);
     }
 
     private static void add(Map<String, double[]> into, Map<String, double[]> from, double k) {

@@ -78,12 +78,14 @@ class PlacementTest {
     @Test
     void membersAreReadInStepOrByName() {
         Model m = Models.yaml(MODEL);
+        java.util.Iterator<String> names = m.members().keySet().iterator();
         java.util.Iterator<Member> inOrder = m.members().values().iterator();
-        assertSame(m.member("M1"), m.memberInStep(inOrder, "M1"));
-        assertSame(m.member("M2"), m.memberInStep(inOrder, "M2"));
-        assertSame(m.member("M1"), m.memberInStep(inOrder, "M1"), "past the end: by name");
+        assertSame(m.member("M1"), Model.inStep(names, inOrder, "M1", m.members()));
+        assertSame(m.member("M2"), Model.inStep(names, inOrder, "M2", m.members()));
+        assertSame(m.member("M1"), Model.inStep(names, inOrder, "M1", m.members()), "past the end: by name");
+        java.util.Iterator<String> freshNames = m.members().keySet().iterator();
         java.util.Iterator<Member> fresh = m.members().values().iterator();
-        assertSame(m.member("M2"), m.memberInStep(fresh, "M2"), "out of order: by name, not the next one");
-        assertEquals(null, m.memberInStep(fresh, "M9"), "no such member");
+        assertSame(m.member("M2"), Model.inStep(freshNames, fresh, "M2", m.members()), "out of order: by name, not the next one");
+        assertEquals(null, Model.inStep(freshNames, fresh, "M9", m.members()), "no such member");
     }
 }
