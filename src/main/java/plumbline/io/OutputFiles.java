@@ -3,13 +3,10 @@ package plumbline.io;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.StreamWriteFeature;
 import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.SerializableString;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
-import java.nio.ByteBuffer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -90,7 +87,7 @@ public final class OutputFiles {
         if (twoThreads && !indent) {
             List<JsonOut.Streamed> found = new ArrayList<>();
             collect(tree, found);
-            if (found.size() > 1) parts = new SharedParts(f, found);
+            if (found.size() > 1) parts = new SharedParts(f, found, out);
         }
         try (JsonGenerator g = f.createGenerator(out)) {
             if (indent) g.useDefaultPrettyPrinter();
@@ -123,14 +120,16 @@ public final class OutputFiles {
         static final int AHEAD = 4;
         private final JsonFactory f;
         private final List<JsonOut.Streamed> parts;
+        private final OutputStream out; // the stream the writer's generator writes to
         private final List<CompletableFuture<byte[]>> texts = new ArrayList<>();
         private int taken, written; // parts taken by either thread; parts the writer is past (guarded by this)
         private boolean stopped;
         private int reached; // the writer's next part (the writer's own)
 
-        SharedParts(JsonFactory f, List<JsonOut.Streamed> parts) {
+        SharedParts(JsonFactory f, List<JsonOut.Streamed> parts, OutputStream out) {
             this.f = f;
             this.parts = parts;
+            this.out = out;
             for (int i = 0; i < parts.size(); i++) texts.add(new CompletableFuture<>());
             Thread helper = new Thread(this::help, "results writer");
             helper.setDaemon(true);
@@ -204,7 +203,11 @@ public final class OutputFiles {
                 throw new IOException(e.getCause());
             }
             texts.set(i, null); // the copied text is let go
-            g.writeRawValue(new RawUtf8(text));
+            // the value's place marked (a separator written where one is due), what the generator holds
+            // passed on to the stream, and the text written straight after it
+            g.writeRawValue("");
+            g.flush();
+            out.write(text);
             passed(i);
         }
 
@@ -216,69 +219,6 @@ public final class OutputFiles {
         synchronized void stop() {
             stopped = true;
             notifyAll();
-        }
-    }
-
-    /** JSON text already written (UTF-8), placed as one value. */
-    private record RawUtf8(byte[] text) implements SerializableString {
-        public String getValue() {
-            return new String(text, StandardCharsets.UTF_8);
-        }
-
-        public int charLength() {
-            return getValue().length();
-        }
-
-        public char[] asQuotedChars() {
-            throw new UnsupportedOperationException("raw JSON text is not quoted");
-        }
-
-        public byte[] asUnquotedUTF8() {
-            return text;
-        }
-
-        public byte[] asQuotedUTF8() {
-            throw new UnsupportedOperationException("raw JSON text is not quoted");
-        }
-
-        public int appendQuotedUTF8(byte[] buffer, int offset) {
-            throw new UnsupportedOperationException("raw JSON text is not quoted");
-        }
-
-        public int appendQuoted(char[] buffer, int offset) {
-            throw new UnsupportedOperationException("raw JSON text is not quoted");
-        }
-
-        public int appendUnquotedUTF8(byte[] buffer, int offset) {
-            if (text.length > buffer.length - offset) return -1;
-            System.arraycopy(text, 0, buffer, offset, text.length);
-            return text.length;
-        }
-
-        public int appendUnquoted(char[] buffer, int offset) {
-            String s = getValue();
-            if (s.length() > buffer.length - offset) return -1;
-            s.getChars(0, s.length(), buffer, offset);
-            return s.length();
-        }
-
-        public int writeQuotedUTF8(OutputStream out) {
-            throw new UnsupportedOperationException("raw JSON text is not quoted");
-        }
-
-        public int writeUnquotedUTF8(OutputStream out) throws IOException {
-            out.write(text);
-            return text.length;
-        }
-
-        public int putQuotedUTF8(ByteBuffer buffer) {
-            throw new UnsupportedOperationException("raw JSON text is not quoted");
-        }
-
-        public int putUnquotedUTF8(ByteBuffer buffer) {
-            if (text.length > buffer.remaining()) return -1;
-            buffer.put(text);
-            return text.length;
         }
     }
 
