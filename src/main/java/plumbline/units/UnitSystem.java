@@ -17,8 +17,18 @@ public record UnitSystem(Unit force, Unit length) {
 
     /** Factor from a bare number of dimension {@code d} in this system to internal units. */
     public double factor(Dimension d) {
-        double f = Math.pow(force.toInternal(), d.force()) * Math.pow(length.toInternal(), d.length());
-        return f;
+        return power(force.toInternal(), d.force()) * power(length.toInternal(), d.length());
+    }
+
+    /**
+     * {@code Math.pow(x, n)} to the bit, without calling it for the exponents of the common
+     * dimensions (force, length, moment, none): pow returns 1.0 for a zero exponent and x itself
+     * for 1. A large model's results convert millions of numbers, each with a factor.
+     */
+    static double power(double x, int n) {
+        if (n == 0) return 1.0;
+        if (n == 1) return x;
+        return Math.pow(x, n);
     }
 
     public double toInternal(double bare, Dimension d) {
@@ -27,8 +37,7 @@ public record UnitSystem(Unit force, Unit length) {
 
     /** Internal value expressed as a bare number of this system (angles in radians). */
     public double fromInternal(double internal, Dimension d) {
-        double f = Math.pow(force.toInternal(), d.force()) * Math.pow(length.toInternal(), d.length());
-        return internal / f;
+        return internal / factor(d);
     }
 
     /** The written symbol of a derived dimension in this system, e.g. kN*m, kN/m. */

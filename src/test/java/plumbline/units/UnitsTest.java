@@ -43,6 +43,27 @@ class UnitsTest {
         assertEquals(si, u.toInternal(), Math.abs(si) * relTol, symbol);
     }
 
+    /**
+     * The factor of a dimension is the JDK's Math.pow of each unit to its exponent, to the bit
+     * (the common exponents 0 and 1 skip the call: pow's specification gives 1.0 and x itself).
+     */
+    @ParameterizedTest(name = "factors in {0} and {1} as Math.pow gives them")
+    @CsvSource({"kN, m", "kip, ft", "lbf, in", "N, mm", "MN, cm"})
+    void factorsAreMathPowToTheBit(String force, String length) throws Exception {
+        UnitSystem u = new UnitSystem(Units.parse(force), Units.parse(length));
+        double f = u.force().toInternal(), l = u.length().toInternal();
+        for (int fe = -2; fe <= 2; fe++) {
+            for (int le = -4; le <= 4; le++) {
+                Dimension d = new Dimension(fe, le, 0, 0);
+                double expected = Math.pow(f, fe) * Math.pow(l, le);
+                assertEquals(Double.doubleToRawLongBits(expected), Double.doubleToRawLongBits(u.factor(d)), d.toString());
+                double internal = 1234.567891234;
+                assertEquals(Double.doubleToRawLongBits(internal / expected),
+                        Double.doubleToRawLongBits(u.fromInternal(internal, d)), d.toString());
+            }
+        }
+    }
+
     @Test
     void quantitiesCarryTheirDimension() throws Exception {
         Units.Written w = Units.parseQuantity("1.42e8 mm4");
