@@ -121,7 +121,7 @@ public final class OutputFiles {
         private final JsonFactory f;
         private final List<JsonOut.Streamed> parts;
         private final OutputStream out; // the stream the writer's generator writes to
-        private final List<CompletableFuture<byte[]>> texts = new ArrayList<>();
+        private final List<CompletableFuture<Chunks>> texts = new ArrayList<>();
         private int taken, written; // parts taken by either thread; parts the writer is past (guarded by this)
         private boolean stopped;
         private int reached; // the writer's next part (the writer's own)
@@ -157,11 +157,11 @@ public final class OutputFiles {
         /** Part {@code j}'s text, written into memory (or the failure that stopped it). */
         private void writeToMemory(int j) {
             try {
-                ByteArrayOutputStream text = new ByteArrayOutputStream(1 << 16);
+                Chunks text = new Chunks();
                 try (JsonGenerator g = f.createGenerator(text)) {
                     parts.get(j).write(new JsonOut(g));
                 }
-                texts.get(j).complete(text.toByteArray());
+                texts.get(j).complete(text);
             } catch (Throwable t) {
                 texts.get(j).completeExceptionally(t);
             }
@@ -190,7 +190,7 @@ public final class OutputFiles {
         }
 
         private void copy(int i, JsonGenerator g) throws IOException {
-            byte[] text;
+            Chunks text;
             try {
                 text = texts.get(i).get();
             } catch (InterruptedException e) {
@@ -207,7 +207,7 @@ public final class OutputFiles {
             // passed on to the stream, and the text written straight after it
             g.writeRawValue("");
             g.flush();
-            out.write(text);
+            text.writeTo(out);
             passed(i);
         }
 
@@ -219,6 +219,47 @@ public final class OutputFiles {
         synchronized void stop() {
             stopped = true;
             notifyAll();
+        }
+    }
+
+    /**
+     * Bytes held in memory as a list of blocks: a part of megabytes is kept without the copies
+     * a growing array makes (each block is filled once and written once).
+     */
+    static final class Chunks extends OutputStream {
+        static final int BLOCK = 1 << 16;
+        private final List<byte[]> full = new ArrayList<>();
+        private byte[] last = new byte[BLOCK];
+        private int used;
+
+        @Override
+        public void write(int b) {
+            if (used == BLOCK) next();
+            last[used++] = (byte) b;
+        }
+
+        @Override
+        public void write(byte[] b, int off, int len) {
+            while (len > 0) {
+                if (used == BLOCK) next();
+                int n = Math.min(len, BLOCK - used);
+                System.arraycopy(b, off, last, used, n);
+                used += n;
+                off += n;
+                len -= n;
+            }
+        }
+
+        private void next() {
+            full.add(last);
+            last = new byte[BLOCK];
+            used = 0;
+        }
+
+        /** Every byte written, in order. */
+        void writeTo(OutputStream out) throws IOException {
+            for (byte[] b : full) out.write(b);
+            out.write(last, 0, used);
         }
     }
 

@@ -65,6 +65,38 @@ class JsonTwoThreadsTest {
         assertEquals(1 + 19_999 / 7.0, (Double) large.get("m19999"), 0.0);
     }
 
+    /** A part held in blocks gives back every byte in order: against the JDK's ByteArrayOutputStream. */
+    @Test
+    void aPartHeldInBlocksGivesBackEveryByteInOrder() throws IOException {
+        java.util.Random random = new java.util.Random(17);
+        for (int run = 0; run < 20; run++) {
+            OutputFiles.Chunks chunks = new OutputFiles.Chunks();
+            ByteArrayOutputStream reference = new ByteArrayOutputStream();
+            int writes = 1 + random.nextInt(40);
+            for (int w = 0; w < writes; w++) {
+                // single bytes, short runs, runs that end exactly on a block, runs of several blocks
+                int len = switch (random.nextInt(4)) {
+                    case 0 -> 1;
+                    case 1 -> random.nextInt(300);
+                    case 2 -> OutputFiles.Chunks.BLOCK;
+                    default -> random.nextInt(3 * OutputFiles.Chunks.BLOCK);
+                };
+                byte[] b = new byte[len + 5];
+                random.nextBytes(b);
+                if (len == 1) {
+                    chunks.write(b[0]);
+                    reference.write(b[0]);
+                } else {
+                    chunks.write(b, 5, len);
+                    reference.write(b, 5, len);
+                }
+            }
+            ByteArrayOutputStream back = new ByteArrayOutputStream();
+            chunks.writeTo(back);
+            assertArrayEquals(reference.toByteArray(), back.toByteArray(), "run " + run);
+        }
+    }
+
     @Test
     void aPartThatFailsMakesTheWritingFailWhicheverThreadTookIt() {
         for (int failing = 0; failing < 6; failing++) {
