@@ -33,6 +33,26 @@ class NumbersTest {
         assertEquals("0", Console.fmt(-0.0));
     }
 
+    /**
+     * The fixed decimals are the JDK formatter's "%.nf" (with its "-0.00" printed unsigned), for
+     * values of every magnitude the report prints, decimal ties (x.xx5) and binary fractions.
+     */
+    @Test
+    void fixedDecimalsAreTheFormattersDigits() {
+        java.util.Random random = new java.util.Random(11);
+        for (int i = 0; i < 60_000; i++) {
+            double v = switch (i % 3) {
+                case 0 -> (random.nextDouble() - 0.5) * Math.pow(10, random.nextInt(15) - 6);
+                case 1 -> Double.parseDouble((random.nextInt(2_000_000) - 1_000_000) + "5e-" + random.nextInt(9));
+                default -> (random.nextInt(200_000) - 100_000) / 8.0;
+            };
+            int decimals = random.nextInt(10);
+            String formatted = String.format(java.util.Locale.ROOT, "%." + decimals + "f", v);
+            if (formatted.matches("-[0.]*")) formatted = formatted.substring(1);
+            assertEquals(formatted, Console.fixed(v, decimals), v + " to " + decimals + " decimals");
+        }
+    }
+
     @Test
     void differencesFitANarrowColumn() {
         assertEquals("0%", Shown.percent(0));
