@@ -2,7 +2,6 @@ package plumbline.io;
 
 import com.fasterxml.jackson.core.JsonGenerator;
 import com.fasterxml.jackson.core.StreamWriteFeature;
-import com.fasterxml.jackson.core.io.NumberOutput;
 import java.io.IOException;
 import java.util.List;
 
@@ -23,17 +22,22 @@ public final class JsonOut {
     static final int RECENT = 64;
 
     private final JsonGenerator g;
-    private final boolean shortestText;
     // The texts of numbers written lately, by the number's bits (one per slot, the latest wins): the
     // results repeat many numbers (positions at a member's ends and middle, a column's constant axial
-    // force, a support's zero), and forming a number's text is most of the cost of writing it. A number
-    // found here is written as the very text the generator would form for it.
+    // force, a support's zero). Slot i's text is held in recentText from i * ShortestDecimal.ROOM.
     private final long[] recentBits = new long[RECENT];
-    private final String[] recentTexts = new String[RECENT];
+    private final int[] recentLength = new int[RECENT];
+    private final char[] recentText = new char[RECENT * ShortestDecimal.ROOM];
 
+    /**
+     * A writer into {@code g}, whose own numbers must be written the same way: the generator's
+     * fast double writer (the shortest text that reads back, as OutputFiles' generators have it).
+     */
     JsonOut(JsonGenerator g) {
+        if (!g.isEnabled(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)) {
+            throw new IllegalArgumentException("the results' generator writes doubles with the fast (shortest) writer");
+        }
         this.g = g;
-        this.shortestText = g.isEnabled(StreamWriteFeature.USE_FAST_DOUBLE_WRITER);
     }
 
     public JsonOut startObject() throws IOException {
@@ -61,7 +65,7 @@ public final class JsonOut {
         return this;
     }
 
-    /** A number; null when it is not finite. */
+    /** A number, as the shortest text that reads back as it ({@link ShortestDecimal}); null when it is not finite. */
     public JsonOut number(double v) throws IOException {
         if (!Double.isFinite(v)) {
             g.writeNull();
@@ -69,14 +73,12 @@ public final class JsonOut {
         }
         long bits = Double.doubleToRawLongBits(v);
         int slot = (int) ((bits * 0x9E3779B97F4A7C15L) >>> (64 - Integer.numberOfTrailingZeros(RECENT)));
-        String text = recentTexts[slot];
-        if (text == null || recentBits[slot] != bits) {
-            // the text the generator forms for a double (its own writeNumber(double) writes exactly this)
-            text = NumberOutput.toString(v, shortestText);
-            recentTexts[slot] = text;
+        int at = slot * ShortestDecimal.ROOM;
+        if (recentLength[slot] == 0 || recentBits[slot] != bits) {
+            recentLength[slot] = ShortestDecimal.write(v, recentText, at) - at;
             recentBits[slot] = bits;
         }
-        g.writeNumber(text);
+        g.writeNumber(recentText, at, recentLength[slot]);
         return this;
     }
 
