@@ -182,19 +182,30 @@ public final class ResultsTree {
     /** Every member's peaks of one load set, where each occurs, and (pattern envelope) the members loaded for it. */
     private static void members(UnitSystem u, Collection<String> names, LoadSetResult r, JsonOut out) throws IOException {
         out.startObject();
+        int n = PEAKS.size();
+        double[] values = new double[n], places = new double[n]; // refilled for each member
         for (String name : names) {
             out.name(name).startObject();
-            LoadSetResult.Peak[] peaks = r.peaks(name, PEAKS);
-            for (int i = 0; i < peaks.length; i++) {
+            // a pattern envelope's peaks come with the members loaded for each; a plain set's are read in place
+            LoadSetResult.Peak[] withLoaded = r.patterned() ? r.peaks(name, PEAKS) : null;
+            if (withLoaded == null) {
+                r.peaks(name, PEAKS, values, places);
+            } else {
+                for (int i = 0; i < n; i++) {
+                    values[i] = withLoaded[i].value();
+                    places[i] = withLoaded[i].xM();
+                }
+            }
+            for (int i = 0; i < n; i++) {
                 Quantity q = PEAKS.get(i);
-                out.name(q.symbol).number(u.fromInternal(peaks[i].value(), q.dimension));
+                out.name(q.symbol).number(u.fromInternal(values[i], q.dimension));
             }
             out.name("at").startObject();
-            for (int i = 0; i < peaks.length; i++) out.name(PEAKS.get(i).symbol).number(u.fromInternal(peaks[i].xM(), Dimension.LENGTH));
+            for (int i = 0; i < n; i++) out.name(PEAKS.get(i).symbol).number(u.fromInternal(places[i], Dimension.LENGTH));
             out.endObject();
-            if (r.patterned()) {
+            if (withLoaded != null) {
                 out.name("loaded_members").startObject();
-                for (int i = 0; i < peaks.length; i++) out.name(PEAKS.get(i).symbol).texts(peaks[i].loadedMembers());
+                for (int i = 0; i < n; i++) out.name(PEAKS.get(i).symbol).texts(withLoaded[i].loadedMembers());
                 out.endObject();
             }
             out.endObject();
@@ -221,16 +232,18 @@ public final class ResultsTree {
         List<LoadSetResult> results = combos.stream().map(s -> sols.get(s.name())).toList();
         out.put("members", (JsonOut.Streamed) json -> {
             json.startObject();
-            LoadSetResult.Peak[][] byCombination = new LoadSetResult.Peak[combos.size()][];
+            // every combination's peaks of one member, refilled member after member (the places are not listed)
+            double[][] byCombination = new double[combos.size()][PEAKS.size()];
+            double[] places = new double[PEAKS.size()];
             for (String mem : m.members().keySet()) {
                 json.name(mem).startObject();
-                for (int k = 0; k < combos.size(); k++) byCombination[k] = results.get(k).peaks(mem, PEAKS);
+                for (int k = 0; k < combos.size(); k++) results.get(k).peaks(mem, PEAKS, byCombination[k], places);
                 for (int i = 0; i < PEAKS.size(); i++) {
                     Quantity q = PEAKS.get(i);
                     double best = Double.NaN;
                     String gov = null;
                     for (int k = 0; k < combos.size(); k++) {
-                        double v = byCombination[k][i].value();
+                        double v = byCombination[k][i];
                         boolean better = Double.isNaN(best) || (q.extreme == Quantity.Extreme.MIN ? v < best : v > best);
                         if (better) {
                             best = v;

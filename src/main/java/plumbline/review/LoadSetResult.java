@@ -39,6 +39,19 @@ public sealed interface LoadSetResult {
     }
 
     /**
+     * The member's peaks of these quantities written into {@code values} (SI) and {@code placesM}
+     * (m from its start), in their order, as {@link #peak} of each: for a writer of every member,
+     * which fills the same two arrays member after member instead of taking objects for each.
+     */
+    default void peaks(String member, List<Quantity> quantities, double[] values, double[] placesM) {
+        for (int i = 0; i < quantities.size(); i++) {
+            Peak p = peak(member, quantities.get(i));
+            values[i] = p.value();
+            placesM[i] = p.xM();
+        }
+    }
+
+    /**
      * A member function's value at {@code xM} from the start (the value just left of it when
      * {@code fromLeft}, as at the member's end); for an envelope its upper or lower value.
      */
@@ -88,6 +101,16 @@ public sealed interface LoadSetResult {
             Peak[] out = new Peak[quantities.size()];
             for (int i = 0; i < out.length; i++) out[i] = peak(p, quantities.get(i));
             return out;
+        }
+
+        @Override
+        public void peaks(String member, List<Quantity> quantities, double[] values, double[] placesM) {
+            Peaks p = solution.members().get(member).peaks();
+            for (int i = 0; i < quantities.size(); i++) {
+                Quantity q = quantities.get(i);
+                values[i] = p.value(q);
+                placesM[i] = p.position(q);
+            }
         }
 
         private static Peak peak(Peaks p, Quantity quantity) {

@@ -103,6 +103,13 @@ class PatternEnvelopeTest {
                 LoadSetResult.Peak[] together = x.peaks(mem, all);
                 assertEquals(all.size(), together.length);
                 for (int i = 0; i < all.size(); i++) assertEquals(x.peak(mem, all.get(i)), together[i], mem + " " + all.get(i));
+                // and written into two arrays (values, places), as the results writer reads them
+                double[] values = new double[all.size()], places = new double[all.size()];
+                x.peaks(mem, all, values, places);
+                for (int i = 0; i < all.size(); i++) {
+                    assertEquals(together[i].value(), values[i], 0, mem + " " + all.get(i));
+                    assertEquals(together[i].xM(), places[i], 0, mem + " " + all.get(i) + " place");
+                }
             }
         }
         assertEquals(-36e3, plain.peaks("S1", List.of(Quantity.M_MIN))[0].value(), 1e-6);
