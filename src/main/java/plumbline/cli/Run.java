@@ -77,7 +77,7 @@ final class Run {
         }
         Checked c;
         try {
-            c = Checked.of(in, o.method(), o.tolerance());
+            c = Checked.of(in, o.method(), o.tolerance(), !o.checking());
         } catch (Checked.Refused e) {
             for (String line : e.lines()) err.println(line);
             return Main.INPUT;

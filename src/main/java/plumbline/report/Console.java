@@ -9,6 +9,7 @@ import plumbline.model.Claim;
 import plumbline.model.Model;
 import plumbline.model.Quantity;
 import plumbline.review.Agreement;
+import plumbline.review.Analysis;
 import plumbline.review.ClaimResult;
 import plumbline.review.LoadSetResult;
 import plumbline.review.Review;
@@ -150,8 +151,7 @@ public final class Console {
     static final int MEMBERS_LISTED = 12;
 
     /** The results of {@code solve} in 80 columns: reactions and member peaks per load set. */
-    public static String results(Review r) {
-        var a = r.analysis();
+    public static String results(Analysis a) {
         if (!a.stable() || a.primaryEngine() == null) return "";
         Model m = a.model();
         UnitSystem u = m.units();

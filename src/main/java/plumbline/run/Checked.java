@@ -6,6 +6,7 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
 import plumbline.io.OutputFiles;
 import plumbline.report.Console;
 import plumbline.report.Figures;
@@ -48,12 +49,14 @@ public final class Checked {
     private final Analysis analysis;
     private final Review review;
     private final List<String> notes;
+    private final String listing; // the results listed in 80 columns, when asked for at the analysis (else null)
 
-    private Checked(CheckInputs inputs, Analysis analysis, Review review, List<String> notes) {
+    private Checked(CheckInputs inputs, Analysis analysis, Review review, List<String> notes, String listing) {
         this.inputs = inputs;
         this.analysis = analysis;
         this.review = review;
         this.notes = List.copyOf(notes);
+        this.listing = listing;
     }
 
     static List<Engine> engines(Method method, boolean forceFits) {
@@ -70,6 +73,15 @@ public final class Checked {
      * @throws Refused when no asked engine can solve this model (the force method on a model too large for it)
      */
     public static Checked of(CheckInputs in, Method method, double toleranceRatio) throws Refused {
+        return of(in, method, toleranceRatio, false);
+    }
+
+    /**
+     * As {@link #of(CheckInputs, Method, double)}; with {@code listResults} the console's listing of
+     * the results ({@code solve}) is formed as well, for a large model on the other core while the
+     * claims are reviewed (it needs the analysis alone).
+     */
+    public static Checked of(CheckInputs in, Method method, double toleranceRatio, boolean listResults) throws Refused {
         String tooLarge = ForceEngine.tooLarge(in.model());
         if (method == Method.force && tooLarge != null) {
             throw new Refused(List.of("plumbline: --method force: " + tooLarge
@@ -91,11 +103,15 @@ public final class Checked {
         // the diagnosis re-solves variants of the model with the check's own stiffness engine, so a variant
         // that changes only loads reuses the check's factorization
         Engine variants = engines.stream().filter(e -> e instanceof StiffnessEngine).findFirst().orElseGet(StiffnessEngine::new);
+        CompletableFuture<String> listing = !listResults ? CompletableFuture.completedFuture(null)
+                : SideBySide.worth(in.model().members().size(), a.loadSets().size())
+                ? CompletableFuture.supplyAsync(() -> Console.results(a))
+                : CompletableFuture.completedFuture(Console.results(a));
         Review r = Review.of(a, new TolerancePolicy(toleranceRatio), variants);
         for (var e : a.engines().values()) {
             if (e.declined()) notes.add(e.engine() + " method not run: " + e.instability() + "; the results are the other method's alone");
         }
-        return new Checked(in, a, r, notes);
+        return new Checked(in, a, r, notes, SideBySide.joined(listing));
     }
 
     /**
@@ -174,7 +190,7 @@ public final class Checked {
     public String console(boolean listAll) {
         String names = String.join(" and ", analysis.solutions().keySet()) + (analysis.solutions().size() == 1 ? " method" : " methods");
         StringBuilder s = new StringBuilder(Console.summary(review, analysis.solutions().isEmpty() ? "none" : names, agreement()));
-        if (listAll) s.append(Console.results(review));
+        if (listAll) s.append(listing != null ? listing : Console.results(analysis));
         for (String n : notes) s.append(Console.wrap("Note: " + n, "  "));
         return s.toString();
     }
