@@ -109,12 +109,15 @@ public final class OutputFiles {
     }
 
     /**
-     * The streamed parts of one compact tree shared by the writer and a helper thread. Parts are
-     * taken in order, each by one thread, and none more than {@link #AHEAD} parts beyond the
-     * writer's place (so at most that many texts are held in memory). The helper writes each part
-     * it takes into memory. The writer, reaching a part, writes it straight out if no one has
-     * taken it; if the helper is still writing it, the writer takes the next free part into
-     * memory meanwhile, then copies the helper's text in its place.
+     * The streamed parts of one compact tree shared by the writer and a helper thread. The helper
+     * first takes the last part (in the results, the envelope over every combination: the slowest
+     * to form, as it reads every combination's peaks of every member; taken last, one thread would
+     * form it alone at the end while the other waited). The other parts are taken in order, each
+     * by one thread, and none more than {@link #AHEAD} parts beyond the writer's place (so at most
+     * that many texts, and the last part's, are held in memory). The helper writes each part it
+     * takes into memory. The writer, reaching a part, writes it straight out if no one has taken
+     * it; if the helper is still writing it, the writer takes the next free part into memory
+     * meanwhile, then copies the helper's text in its place.
      */
     private static final class SharedParts {
         static final int AHEAD = 4;
@@ -122,7 +125,8 @@ public final class OutputFiles {
         private final List<JsonOut.Streamed> parts;
         private final OutputStream out; // the stream the writer's generator writes to
         private final List<CompletableFuture<Chunks>> texts = new ArrayList<>();
-        private int taken, written; // parts taken by either thread; parts the writer is past (guarded by this)
+        private int taken, written; // parts taken in order by either thread; parts the writer is past (guarded by this)
+        private int inOrder; // the parts taken in order: all but the last once the helper has taken it first (guarded by this)
         private boolean stopped;
         private int reached; // the writer's next part (the writer's own)
 
@@ -131,23 +135,32 @@ public final class OutputFiles {
             this.parts = parts;
             this.out = out;
             for (int i = 0; i < parts.size(); i++) texts.add(new CompletableFuture<>());
+            inOrder = parts.size();
             Thread helper = new Thread(this::help, "results writer");
             helper.setDaemon(true);
             helper.start();
         }
 
         private void help() {
+            int last;
+            synchronized (this) {
+                // the last part, unless the writer has already taken it (a tree of one part)
+                last = parts.size() - 1;
+                if (stopped || taken > last) return;
+                inOrder = last;
+            }
+            writeToMemory(last);
             while (true) {
                 int j;
                 synchronized (this) {
-                    while (!stopped && taken < parts.size() && taken > written + AHEAD) {
+                    while (!stopped && taken < inOrder && taken > written + AHEAD) {
                         try {
                             wait();
                         } catch (InterruptedException e) {
                             return;
                         }
                     }
-                    if (stopped || taken >= parts.size()) return;
+                    if (stopped || taken >= inOrder) return;
                     j = taken++;
                 }
                 writeToMemory(j);
@@ -173,11 +186,11 @@ public final class OutputFiles {
             while (true) {
                 int other = -1;
                 synchronized (this) {
-                    if (taken == i) {
+                    if (taken == i && i < inOrder) {
                         taken++;
                         break;
                     }
-                    if (!texts.get(i).isDone() && taken < parts.size() && taken <= written + AHEAD) other = taken++;
+                    if (!texts.get(i).isDone() && taken < inOrder && taken <= written + AHEAD) other = taken++;
                 }
                 if (other < 0) {
                     copy(i, g);
