@@ -59,24 +59,24 @@ final class ShortestDecimal {
         return p;
     }
 
-    /** floor(q log10 2), for |q| up to 5,456 (the integer approximation of log10 2 is exact that far). */
+    /** floor(q log10 2), by an integer approximation of log10 2 (exact for |q| <= 1,500, ShortestDecimalTest). */
     static int flog10pow2(int q) {
         return (int) (q * 661_971_961_083L >> 41);
     }
 
-    /** floor(log10(3/4 2^q)), for |q| up to 5,456. */
+    /** floor(log10(3/4 2^q)) (exact for |q| <= 1,500, ShortestDecimalTest). */
     static int flog10threeQuartersPow2(int q) {
         return (int) (q * 661_971_961_083L + -274_743_187_321L >> 41);
     }
 
-    /** floor(e log2 10), for |e| up to 1,233. */
+    /** floor(e log2 10) (exact for |e| <= 400, ShortestDecimalTest; the powers need |e| <= 324). */
     static int flog2pow10(int e) {
         return (int) (e * 913_124_641_741L >> 38);
     }
 
     /**
-     * Writes the text of {@code v} into {@code buf} from {@code at} (room for {@link #MAX_CHARS}
-     * needed) and returns the position after it. {@code v} must be finite.
+     * Writes the text of {@code v} into {@code buf} from {@code at} (room for {@link #ROOM}
+     * characters needed) and returns the position after it. {@code v} must be finite.
      */
     static int write(double v, char[] buf, int at) {
         long bits = Double.doubleToRawLongBits(v);
@@ -102,7 +102,8 @@ final class ShortestDecimal {
 
     /** The shortest decimal in the rounding interval of c 2^q (times 10^dk), laid out. */
     private static int toDecimal(int q, long c, int dk, char[] buf, int at) {
-        int out = (int) c & 1; // an even significand's interval includes its ends
+        // the reals that round to c 2^q: the ends belong to it when c is even (ties go to even), not when odd
+        int out = (int) c & 1;
         long cb = c << 2;
         long cbr = cb + 2;
         long cbl;
