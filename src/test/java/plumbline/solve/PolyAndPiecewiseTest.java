@@ -14,6 +14,30 @@ import org.junit.jupiter.api.Test;
  */
 class PolyAndPiecewiseTest {
 
+    /**
+     * A value is Horner's rule as the loop writes it, (...(0 t + c_n) t + ...) t + c_0, to the
+     * bit, for every degree (those written out and those looped), at any t, a leading -0.0
+     * included (0 t + (-0.0) is +0.0 for t >= 0).
+     */
+    @Test
+    void valuesAreHornersRuleToTheBit() {
+        java.util.Random random = new java.util.Random(5);
+        for (int degree = 0; degree <= 7; degree++) {
+            for (int i = 0; i < 2_000; i++) {
+                double[] c = new double[degree + 1];
+                for (int k = 0; k <= degree; k++) c[k] = random.nextGaussian() * Math.pow(10, random.nextInt(9) - 4);
+                if (degree == 0 && i % 3 == 0) c[0] = -0.0;
+                double t = i < 2 ? (i == 0 ? Double.POSITIVE_INFINITY : Double.NaN) // the loop's 0 t makes these NaN
+                        : random.nextInt(4) == 0 ? -random.nextDouble() * 6 : random.nextDouble() * 6;
+                double v = 0;
+                for (int k = degree; k >= 0; k--) v = v * t + c[k];
+                assertEquals(Double.doubleToRawLongBits(v), Double.doubleToRawLongBits(new Poly(c).at(t)),
+                        "degree " + degree + " at " + t);
+            }
+        }
+        assertEquals(17, new Poly(1, 2, 3).at(2), 0); // 1 + 2*2 + 3*4
+    }
+
     @Test
     void polynomialAlgebra() {
         Poly p = new Poly(1, 2, 3); // 1 + 2t + 3t^2
