@@ -13,9 +13,18 @@ public final class Poly {
     private final double[] c;
 
     public Poly(double... coefficients) {
+        this(coefficients, false);
+    }
+
+    /**
+     * The polynomial of these coefficients, trailing zeros left out. An array formed by an
+     * operation here ({@code owned}) is kept as it is when it has none (every member function's
+     * arithmetic forms new polynomials, millions in a large model); a caller's array is copied.
+     */
+    private Poly(double[] coefficients, boolean owned) {
         int n = coefficients.length;
         while (n > 1 && coefficients[n - 1] == 0.0) n--;
-        this.c = Arrays.copyOf(coefficients, Math.max(n, 1));
+        this.c = owned && n == coefficients.length && n > 0 ? coefficients : Arrays.copyOf(coefficients, Math.max(n, 1));
     }
 
     public int degree() {
@@ -54,19 +63,19 @@ public final class Poly {
     public Poly plus(Poly o) {
         double[] r = new double[Math.max(c.length, o.c.length)];
         for (int k = 0; k < r.length; k++) r[k] = coefficient(k) + o.coefficient(k);
-        return new Poly(r);
+        return new Poly(r, true);
     }
 
     public Poly times(double s) {
         double[] r = c.clone();
         for (int k = 0; k < r.length; k++) r[k] *= s;
-        return new Poly(r);
+        return new Poly(r, true);
     }
 
     public Poly times(Poly o) {
         double[] r = new double[c.length + o.c.length - 1];
         for (int i = 0; i < c.length; i++) for (int j = 0; j < o.c.length; j++) r[i + j] += c[i] * o.c[j];
-        return new Poly(r);
+        return new Poly(r, true);
     }
 
     /** The antiderivative that is {@code value0} at t = 0. */
@@ -74,14 +83,14 @@ public final class Poly {
         double[] r = new double[c.length + 1];
         r[0] = value0;
         for (int k = 0; k < c.length; k++) r[k + 1] = c[k] / (k + 1);
-        return new Poly(r);
+        return new Poly(r, true);
     }
 
     public Poly derivative() {
         if (c.length == 1) return ZERO;
         double[] r = new double[c.length - 1];
         for (int k = 1; k < c.length; k++) r[k - 1] = c[k] * k;
-        return new Poly(r);
+        return new Poly(r, true);
     }
 
     /** The same polynomial written in s = t - shift (a Taylor shift). */
@@ -89,7 +98,7 @@ public final class Poly {
         double[] r = c.clone();
         int n = r.length;
         for (int i = 0; i < n; i++) for (int k = n - 2; k >= i; k--) r[k] += shift * r[k + 1];
-        return new Poly(r);
+        return new Poly(r, true);
     }
 
     /** Exact integral over [0, h]. */

@@ -36,6 +36,15 @@ class PolyAndPiecewiseTest {
             }
         }
         assertEquals(17, new Poly(1, 2, 3).at(2), 0); // 1 + 2*2 + 3*4
+        // a caller's array is copied: changing it afterwards changes no polynomial
+        double[] mine = {1, 2, 3};
+        Poly p = new Poly(mine);
+        Poly sum = p.plus(p);
+        mine[2] = 100;
+        assertEquals(17, p.at(2), 0);
+        assertEquals(34, sum.at(2), 0);
+        assertEquals("[1.0, 2.0]", new Poly(1, 2, 0).toString()); // trailing zeros left out
+        assertEquals("[0.0]", new Poly(1, 2).plus(new Poly(-1, -2)).toString()); // a sum that cancels is the zero polynomial
     }
 
     @Test
