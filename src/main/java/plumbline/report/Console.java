@@ -233,12 +233,11 @@ public final class Console {
     }
 
     /**
-     * A value with a fixed number of decimals, never "-0.00": a value that rounds to zero prints
-     * unsigned. The digits are those {@code String.format("%.nf")} prints: the shortest decimal
-     * that reads back as the value (Double.toString), rounded half up to the decimals; formed
-     * here without a formatter, a few times quicker (a large model's console and report print
-     * thousands). A decimal number has no negative zero, so a value that rounds to zero comes
-     * out unsigned.
+     * A value with a fixed number of decimals: the digits {@code String.format("%.nf")} prints
+     * (the shortest decimal that reads back as the value, Double.toString's, rounded half up to
+     * the decimals), formed here without a formatter, a few times quicker (a large model's
+     * console and report print thousands). A decimal number has no negative zero, so a value
+     * that rounds to zero prints unsigned, never "-0.00".
      */
     static String fixed(double v, int decimals) {
         return new BigDecimal(Double.toString(v)).setScale(decimals, RoundingMode.HALF_UP).toPlainString();
