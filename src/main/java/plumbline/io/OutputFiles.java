@@ -144,7 +144,7 @@ public final class OutputFiles {
         private void help() {
             int last;
             synchronized (this) {
-                // the last part, unless the writer has already taken it (a tree of one part)
+                // the last part, unless the writer has already reached it and taken it itself
                 last = parts.size() - 1;
                 if (stopped || taken > last) return;
                 inOrder = last;
