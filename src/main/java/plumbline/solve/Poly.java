@@ -108,8 +108,10 @@ public final class Poly {
 
     /**
      * The real roots in the open interval (0, h), found by isolating them between the
-     * roots of the derivative (on each monotone piece there is at most one) and
-     * bisecting each to machine precision.
+     * roots of the derivative (on each monotone piece there is at most one) and narrowing
+     * each to machine precision: to two neighbouring doubles between which the computed
+     * value changes sign (their midpoint, which rounds to one of them, is returned), or to a
+     * double where it is zero.
      */
     public double[] rootsIn(double h) {
         if (degree() == 0) return new double[0];
@@ -131,19 +133,33 @@ public final class Poly {
                 continue;
             }
             if (fa * fb >= 0) continue;
-            for (int it = 0; it < 200 && b - a > 0; it++) {
+            // False position with the Illinois rule (Dowell and Jarratt, BIT 11, 1971): the next point is
+            // where the chord through the ends' weighted values crosses zero, and an end kept twice in a
+            // row has its weight halved, so that both ends close in (about 13 values a root instead of
+            // bisection's 55). A point that does not fall strictly inside (a, b) (the ends are
+            // neighbouring doubles, or rounding put it on an end) is the midpoint instead.
+            double wa = fa, wb = fb;  // the ends' weights: their values, halved while the other end moves
+            int kept = 0;             // the end the last step kept: -1 a, +1 b
+            for (int it = 0; it < 200; it++) {
                 double mid = 0.5 * (a + b);
                 if (mid <= a || mid >= b) break;
-                double fm = at(mid);
-                if (fm == 0) {
-                    a = b = mid;
+                double x = (wb * a - wa * b) / (wb - wa);
+                if (!(x > a && x < b)) x = mid;
+                double fx = at(x);
+                if (fx == 0) {
+                    a = b = x;
                     break;
                 }
-                if ((fm < 0) == (fa < 0)) {
-                    a = mid;
-                    fa = fm;
+                if ((fx < 0) == (fa < 0)) {
+                    a = x;
+                    fa = wa = fx;
+                    if (kept == 1) wb *= 0.5;
+                    kept = 1;
                 } else {
-                    b = mid;
+                    b = x;
+                    wb = fx;
+                    if (kept == -1) wa *= 0.5;
+                    kept = -1;
                 }
             }
             double r = 0.5 * (a + b);

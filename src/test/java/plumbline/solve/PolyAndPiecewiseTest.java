@@ -91,6 +91,51 @@ class PolyAndPiecewiseTest {
         assertArrayEquals(new double[]{0.75, 1.9}, new Poly(-0.75, 1).times(new Poly(-1.9, 1)).rootsIn(2), 1e-15);
     }
 
+    /**
+     * Every root found is narrowed to machine precision: the computed value is zero there, or
+     * changes sign between it and a neighbouring double. Polynomials of degree 1 to 4 made
+     * from known roots (a member's functions are of these degrees), the roots well apart,
+     * close together (three within 1e-3), triple, and beside a flat stretch; each known root
+     * inside the interval is found, to 1e-9 of the span where the roots are well apart
+     * (algebra by hand: the product of the linear factors).
+     */
+    @Test
+    void rootsAreNarrowedToNeighbouringDoubles() {
+        java.util.Random random = new java.util.Random(11);
+        for (int i = 0; i < 20_000; i++) {
+            double h = 0.5 + 10 * random.nextDouble(), scale = Math.pow(10, random.nextInt(13) - 6);
+            int kind = i % 5, degree = 1 + random.nextInt(4);
+            double[] known = new double[degree];
+            for (int k = 0; k < degree; k++) known[k] = (random.nextDouble() * 1.2 - 0.1) * h;
+            Poly p = new Poly(scale);
+            if (kind == 1) { // three roots within 1e-3 of one another
+                double r = random.nextDouble() * h, s = 1e-3 * random.nextDouble();
+                p = p.times(new Poly(-r, 1)).times(new Poly(-r - s, 1)).times(new Poly(-r + 0.5 * s, 1));
+            } else if (kind == 2) { // a triple root
+                double r = random.nextDouble() * h;
+                p = p.times(new Poly(-r, 1)).times(new Poly(-r, 1)).times(new Poly(-r, 1));
+            } else if (kind == 3) { // a root beside a stretch where the value hardly changes: (t - r)(t^2 + 1e-8)
+                double r = random.nextDouble() * h;
+                p = p.times(new Poly(-r, 1)).times(new Poly(1e-8, 0, 1));
+            } else {
+                for (double r : known) p = p.times(new Poly(-r, 1));
+            }
+            for (double r : p.rootsIn(h)) {
+                double v = p.at(r), below = p.at(Math.nextDown(r)), above = p.at(Math.nextUp(r));
+                boolean narrowed = v == 0 || (below < 0) != (v < 0) || (above < 0) != (v < 0);
+                org.junit.jupiter.api.Assertions.assertTrue(narrowed && r > 0 && r < h,
+                        "root " + r + " of " + p + " on (0, " + h + "): values " + below + ", " + v + ", " + above);
+            }
+            if (kind == 0 || kind == 4) {
+                double[] found = p.rootsIn(h);
+                double[] inside = java.util.Arrays.stream(known).filter(r -> r > 1e-6 * h && r < h * (1 - 1e-6)).sorted().toArray();
+                boolean apart = true;
+                for (int k = 1; k < inside.length; k++) apart &= inside[k] - inside[k - 1] > 1e-3 * h;
+                if (apart) assertArrayEquals(inside, found, 1e-9 * h, "roots of " + p + " on (0, " + h + ")");
+            }
+        }
+    }
+
     /** 1 + t on [0, 2] (1 to 3), then 10 - t on [2, 4] (10 to 8): a jump of 7 at x = 2. */
     static Piecewise jump() {
         return new Piecewise(new double[]{0, 2, 4}, new Poly[]{new Poly(1, 1), new Poly(10, -1)});
