@@ -133,11 +133,12 @@ public final class Poly {
                 continue;
             }
             if (fa * fb >= 0) continue;
-            // False position with the Illinois rule (Dowell and Jarratt, BIT 11, 1971): the next point is
-            // where the chord through the ends' weighted values crosses zero, and an end kept twice in a
-            // row has its weight halved, so that both ends close in (about 13 values a root instead of
-            // bisection's 55). A point that does not fall strictly inside (a, b) (the ends are
-            // neighbouring doubles, or rounding put it on an end) is the midpoint instead.
+            // False position with the Illinois rule (M. Dowell and P. Jarratt, BIT 11, 1971; from
+            // memory): the next point is where the chord through the ends' weighted values crosses
+            // zero, and an end kept twice in a row has its weight halved, so that both ends close in
+            // (about 13 values a root in trials on polynomials of degree 1 to 4, bisection's 55). A
+            // point that does not fall strictly inside (a, b) (the ends are neighbouring doubles, or
+            // rounding put it on an end) is the midpoint instead.
             double wa = fa, wb = fb;  // the ends' weights: their values, halved while the other end moves
             int kept = 0;             // the end the last step kept: -1 a, +1 b
             for (int it = 0; it < 200; it++) {
